@@ -1,0 +1,30 @@
+import { Module } from '@nestjs/common';
+import { APP_GUARD } from '@nestjs/core';
+import { ThrottlerGuard, ThrottlerModule } from '@nestjs/throttler';
+import { AppConfigModule } from './config/app-config.module';
+import { DatabaseModule } from './database/database.module';
+import { QueuesModule } from './queues/queues.module';
+import { StorageModule } from './storage/storage.module';
+import { MailModule } from './mail/mail.module';
+import { HealthModule } from './health/health.module';
+import { DiagnosticsModule } from './diagnostics/diagnostics.module';
+import { AccessGuard } from './common/guards/access.guard';
+
+/** The HTTP API. Long work is queued for the worker process, never run here. */
+@Module({
+  imports: [
+    AppConfigModule,
+    DatabaseModule,
+    QueuesModule,
+    StorageModule,
+    MailModule,
+    ThrottlerModule.forRoot([{ ttl: 60_000, limit: 600 }]),
+    HealthModule,
+    DiagnosticsModule,
+  ],
+  providers: [
+    { provide: APP_GUARD, useClass: ThrottlerGuard },
+    { provide: APP_GUARD, useClass: AccessGuard },
+  ],
+})
+export class AppModule {}

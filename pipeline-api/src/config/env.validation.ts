@@ -1,0 +1,75 @@
+// The API's configuration: read from the environment once at start-up and validated, with
+// defaults that match the local stack of `npm start`.
+import { plainToInstance, Transform, Type } from 'class-transformer';
+import {
+  IsBoolean,
+  IsEmail,
+  IsIn,
+  IsInt,
+  IsOptional,
+  IsString,
+  IsUrl,
+  Max,
+  Min,
+  MinLength,
+  validateSync,
+} from 'class-validator';
+
+const toBool = ({ value }: { value: unknown }) =>
+  typeof value === 'string' ? value === 'true' || value === '1' : value;
+
+/** Every environment variable the API and worker read. */
+export class Env {
+  @IsIn(['development', 'test', 'production'])
+  NODE_ENV: 'development' | 'test' | 'production' = 'development';
+
+  @IsString() API_HOST = '127.0.0.1';
+  @Type(() => Number) @IsInt() @Min(1) @Max(65535) API_PORT = 3000;
+
+  @IsString() DB_HOST = '127.0.0.1';
+  @Type(() => Number) @IsInt() @Min(1) @Max(65535) DB_PORT = 3307;
+  @IsString() DB_NAME = 'overshoot';
+  @IsString() DB_USER = 'overshoot';
+  @IsString() DB_PASSWORD = 'overshoot-local';
+
+  @IsString() REDIS_HOST = '127.0.0.1';
+  @Type(() => Number) @IsInt() @Min(1) @Max(65535) REDIS_PORT = 6380;
+  @IsString() REDIS_PREFIX = 'overshoot';
+
+  @IsUrl({ require_tld: false, protocols: ['http', 'https'] }) S3_ENDPOINT =
+    'http://127.0.0.1:4569';
+  @IsString() S3_REGION = 'us-east-1';
+  @IsString() S3_BUCKET = 'overshoot';
+  @IsString() S3_ACCESS_KEY_ID = 'S3RVER';
+  @IsString() S3_SECRET_ACCESS_KEY = 'S3RVER';
+  @Transform(toBool) @IsBoolean() S3_FORCE_PATH_STYLE = true;
+
+  @IsString() SMTP_HOST = '127.0.0.1';
+  @Type(() => Number) @IsInt() @Min(1) @Max(65535) SMTP_PORT = 2525;
+  @Transform(toBool) @IsBoolean() SMTP_SECURE = false;
+  @Transform(toBool) @IsBoolean() SMTP_IGNORE_TLS = true;
+  @IsOptional() @IsString() SMTP_USER?: string;
+  @IsOptional() @IsString() SMTP_PASSWORD?: string;
+  @IsString() MAIL_FROM = 'Overshoot <overshoot@localhost>';
+
+  @IsOptional() @IsString() WEB_DIST_DIR?: string;
+
+  @IsEmail({ require_tld: false }) ADMIN_EMAIL = 'admin@overshoot.localhost';
+  @IsOptional() @IsString() @MinLength(12) ADMIN_PASSWORD?: string;
+
+  @Type(() => Number) @IsInt() @Min(1) @Max(64) WORKER_CONCURRENCY = 2;
+  @Type(() => Number) @IsInt() @Min(100) @Max(30_000) HEALTH_TIMEOUT_MS = 2000;
+}
+
+/** Validates `process.env`; throws one message listing every bad variable. */
+export function validateEnv(raw: Record<string, unknown>): Env {
+  const env = plainToInstance(Env, raw, { exposeDefaultValues: true });
+  const errors = validateSync(env, { whitelist: false, skipMissingProperties: false });
+  if (errors.length > 0) {
+    const lines = errors.map(
+      (e) => `  ${e.property}: ${Object.values(e.constraints ?? {}).join('; ')}`,
+    );
+    throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
+  }
+  return env;
+}

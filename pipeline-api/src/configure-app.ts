@@ -1,0 +1,53 @@
+import { existsSync } from 'node:fs';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import helmet from 'helmet';
+import { Env } from './config/env.validation';
+import { ApiExceptionFilter } from './common/filters/api-exception.filter';
+import { createValidationPipe } from './common/validation';
+import { spaFallback } from './web/spa-fallback';
+import { jsonBody } from './common/middleware/json-body';
+
+/** Options for creating the app: our own JSON parser answers unreadable bodies (see jsonBody). */
+export const API_APP_OPTIONS = { bodyParser: false } as const;
+
+/** HTTP set-up shared by the server and the tests: prefix, security headers, pipes, filter, docs, web client. */
+export function configureApp(app: NestExpressApplication): void {
+  const env = app.get(Env);
+  app.setGlobalPrefix('api');
+  app.use(...jsonBody());
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'default-src': ["'self'"],
+          'connect-src': ["'self'", env.S3_ENDPOINT],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'worker-src': ["'self'", 'blob:'],
+          // Served over plain http on loopback in development; TLS is the proxy's job in production.
+          'upgrade-insecure-requests': null,
+        },
+      },
+    }),
+  );
+  app.useGlobalPipes(createValidationPipe());
+  app.useGlobalFilters(new ApiExceptionFilter());
+  app.enableShutdownHooks();
+
+  const docs = new DocumentBuilder()
+    .setTitle('Overshoot pipeline API')
+    .setDescription(
+      'Shows, assets, solves, takes, review and tracking for the Overshoot studio pipeline.',
+    )
+    .setVersion('0.1.0')
+    .build();
+  SwaggerModule.setup('api/docs', app, () => SwaggerModule.createDocument(app, docs), {
+    jsonDocumentUrl: 'api/docs/openapi.json',
+  });
+
+  if (env.WEB_DIST_DIR && existsSync(env.WEB_DIST_DIR)) {
+    app.useStaticAssets(env.WEB_DIST_DIR, { index: 'index.html', maxAge: '1h' });
+    app.use(spaFallback(env.WEB_DIST_DIR));
+  }
+}

@@ -1,0 +1,27 @@
+import { defineConfig } from '@mikro-orm/mariadb';
+import { Migrator } from '@mikro-orm/migrations';
+import type { Env } from '../config/env.validation';
+import { User } from '../users/entities/user.entity';
+import { MIGRATIONS } from './migrations';
+
+/** Every entity the ORM knows. */
+export const ENTITIES = [User];
+
+/** MikroORM options from the validated environment. */
+export function ormConfig(env: Env) {
+  return defineConfig({
+    host: env.DB_HOST,
+    port: env.DB_PORT,
+    dbName: env.DB_NAME,
+    user: env.DB_USER,
+    password: env.DB_PASSWORD,
+    entities: ENTITIES,
+    extensions: [Migrator],
+    migrations: { migrationsList: MIGRATIONS, transactional: true, allOrNothing: true },
+    // Fail fast when MariaDB is down instead of queueing requests for a minute.
+    pool: { min: 0, max: 10, acquireTimeoutMillis: 3000 },
+    driverOptions: { connectTimeout: 3000 },
+    debug: false,
+    allowGlobalContext: false,
+  });
+}

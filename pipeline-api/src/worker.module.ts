@@ -1,0 +1,20 @@
+import { Module } from '@nestjs/common';
+import { AppConfigModule } from './config/app-config.module';
+import { DatabaseModule } from './database/database.module';
+import { QueuesModule } from './queues/queues.module';
+import { StorageModule } from './storage/storage.module';
+import { MailModule } from './mail/mail.module';
+import { DiagnosticsWorkerModule } from './diagnostics/diagnostics-worker.module';
+
+/** The worker process: queue processors only, no HTTP. */
+@Module({
+  imports: [
+    AppConfigModule,
+    DatabaseModule,
+    QueuesModule,
+    StorageModule,
+    MailModule,
+    DiagnosticsWorkerModule,
+  ],
+})
+export class WorkerModule {}
