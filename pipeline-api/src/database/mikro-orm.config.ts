@@ -17,7 +17,8 @@ export function ormConfig(env: Env) {
     password: env.DB_PASSWORD,
     entities: ENTITIES,
     extensions: [Migrator],
-    migrations: { migrationsList: MIGRATIONS, transactional: true, allOrNothing: true },
+    // MariaDB commits DDL implicitly, so wrapping migrations in transactions only adds a warning.
+    migrations: { migrationsList: MIGRATIONS, transactional: false, silent: true },
     // Fail fast when MariaDB is down instead of queueing requests for a minute.
     pool: { min: 0, max: 10, acquireTimeoutMillis: 3000 },
     driverOptions: { connectTimeout: 3000 },
