@@ -9,8 +9,9 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..');
 const mode = process.argv[2];
-if (mode !== 'start' && mode !== 'test') {
-  console.error('usage: node scripts/bootstrap.mjs start|test');
+const ENTRIES = { start: 'start.ts', test: 'test.ts', 'test-stack': 'test-stack.ts' };
+if (!(mode in ENTRIES)) {
+  console.error('usage: node scripts/bootstrap.mjs start|test|test-stack');
   process.exit(2);
 }
 
@@ -25,7 +26,7 @@ const DEBIAN = [
   { pkg: 'mariadb-server', bin: 'mariadbd', dirs: ['/usr/sbin', '/usr/bin'] },
   { pkg: 'mariadb-client', bin: 'mariadb-admin', dirs: ['/usr/bin'] },
   { pkg: 'redis-server', bin: 'redis-server', dirs: ['/usr/bin'] },
-  ...(mode === 'test' ? [{ pkg: 'chromium', bin: 'chromium', dirs: ['/usr/bin'] }] : []),
+  ...(mode !== 'start' ? [{ pkg: 'chromium', bin: 'chromium', dirs: ['/usr/bin'] }] : []),
 ];
 
 const missing = DEBIAN.filter(({ bin, dirs }) => !dirs.some((d) => existsSync(join(d, bin))));
@@ -64,5 +65,5 @@ process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
 
 const { register } = await import('tsx/esm/api');
 register();
-const entry = join(root, 'scripts', mode === 'start' ? 'start.ts' : 'test.ts');
+const entry = join(root, 'scripts', ENTRIES[mode]);
 await import(pathToFileURL(entry).href);
