@@ -74,3 +74,8 @@ export async function timeIt(fn: () => unknown): Promise<number> {
   await fn();
   return performance.now() - t0;
 }
+
+/** A rate in millions with one decimal, e.g. "13.4 M". */
+export function formatRate(perSecond: number): string {
+  return `${(perSecond / 1e6).toFixed(1)} M`;
+}

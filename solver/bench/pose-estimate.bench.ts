@@ -46,8 +46,10 @@ export async function runPoseEstimateBench(): Promise<void> {
   };
   for (const iterations of [1, 6]) {
     const ms = await timeIt(() => estimatePoses(c, capture, { iterations }));
+    const passes = iterations === 1 ? '1 pass' : `${iterations} passes (the default)`;
     console.log(
-      `poses     ${n} vertices × ${t} frames, 60 joints, ${iterations} pass(es): ${ms.toFixed(0)} ms (${(ms / t).toFixed(2)} ms/frame)`,
+      `poses     estimation, ${n} vertices × ${t} frames, 60 joints, ${passes}: ` +
+        `${ms.toFixed(0)} ms = ${(t / (ms / 1000)).toFixed(0)} frames/s`,
     );
   }
 }

@@ -23,6 +23,8 @@ interface Token {
 
 interface BvhJoint {
   name: string;
+  /** Line of the joint's name, for errors. */
+  line: number;
   parent: number;
   offset: [number, number, number];
   channels: string[];
@@ -68,7 +70,7 @@ export function readBvh(text: string, options: ReadBvhOptions = {}): Clip {
     expect('OFFSET');
     const offset: [number, number, number] = [number(), number(), number()];
     const index = joints.length;
-    const joint: BvhJoint = { name: name.text, parent, offset, channels: [] };
+    const joint: BvhJoint = { name: name.text, line: name.line, parent, offset, channels: [] };
     joints.push(joint);
     const head = expect('CHANNELS');
     const count = number();
@@ -103,8 +105,12 @@ export function readBvh(text: string, options: ReadBvhOptions = {}): Clip {
   if (joints.length === 0) throw syntax('no ROOT joint', motionLine + 1);
   const names = new Set<string>();
   for (const j of joints) {
-    if (names.has(j.name))
-      throw new SolverInputError('BVH_SYNTAX', `duplicate joint "${j.name}"`, { joint: j.name });
+    if (names.has(j.name)) {
+      throw new SolverInputError('BVH_SYNTAX', `line ${j.line}: duplicate joint "${j.name}"`, {
+        joint: j.name,
+        line: j.line,
+      });
+    }
     names.add(j.name);
   }
   return readMotion(lines, motionLine, joints, opts);

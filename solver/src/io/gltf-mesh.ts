@@ -57,12 +57,13 @@ export function readMeshGeometry(mesh: Mesh, warnings: string[]): MeshGeometry {
   const vertexOffsets: number[] = [];
   let n = 0;
   let f = 0;
-  for (const p of primitives) {
+  primitives.forEach((p, k) => {
     vertexOffsets.push(n);
     const count = p.getAttribute('POSITION')!.getCount();
+    checkAttributeCounts(p, count, `${meshName} primitive ${k}`);
     n += count;
     f += p.getIndices()?.getCount() ?? count;
-  }
+  });
   const positions = new Float32Array(3 * n);
   const triangles = new Uint32Array(f - (f % 3));
   const hasNormals = primitives.every((p) => p.getAttribute('NORMAL'));
@@ -113,6 +114,20 @@ export function readMeshGeometry(mesh: Mesh, warnings: string[]): MeshGeometry {
     weightSets,
     regionValues,
   };
+}
+
+/** Every vertex attribute must have one element per position (VERTEX_COUNT_MISMATCH otherwise). */
+function checkAttributeCounts(p: Primitive, count: number, where: string): void {
+  for (const semantic of p.listSemantics()) {
+    const n = p.getAttribute(semantic)!.getCount();
+    if (n !== count) {
+      throw new SolverInputError(
+        'VERTEX_COUNT_MISMATCH',
+        `${where}: ${semantic} has ${n} elements but POSITION has ${count}`,
+        { item: `${where}: ${semantic}` },
+      );
+    }
+  }
 }
 
 /** Number of JOINTS_n/WEIGHTS_n pairs present on every primitive. */

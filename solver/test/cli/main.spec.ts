@@ -63,6 +63,16 @@ describe('overshoot-solve inspect', () => {
     expect(r.stderr).toMatch(/^BAD_FPS: /);
   });
 
+  it('exits 2 with "CODE: message" for a truncated .glb from the bad-input corpus', async () => {
+    const file = fileURLToPath(new URL('../fixtures/bad/truncated-character.glb', import.meta.url));
+    const r = await run(['inspect', file]);
+    expect(r.code).toBe(2);
+    expect(r.stdout).toBe('');
+    // One line: the stable code, then a sentence saying what is wrong.
+    expect(r.stderr).toMatch(/^TRUNCATED_FILE: file declares \d+ bytes but holds only \d+ /);
+    expect(r.stderr.trim().split('\n')).toHaveLength(1);
+  });
+
   it('exits 2 with usage for no arguments and "not yet available" for later commands', async () => {
     const none = await run([]);
     expect(none.code).toBe(2);
