@@ -9,6 +9,12 @@ import { MailModule } from './mail/mail.module';
 import { HealthModule } from './health/health.module';
 import { DiagnosticsModule } from './diagnostics/diagnostics.module';
 import { AccessGuard } from './common/guards/access.guard';
+import { AuditModule } from './audit/audit.module';
+import { MailOutboxModule } from './mail/mail-outbox.module';
+import { AuthModule } from './auth/auth.module';
+import { UsersModule } from './users/users.module';
+import { ShowsModule } from './shows/shows.module';
+import { TokensModule } from './tokens/tokens.module';
 
 /** The HTTP API. Long work is queued for the worker process, never run here. */
 @Module({
@@ -21,6 +27,12 @@ import { AccessGuard } from './common/guards/access.guard';
     ThrottlerModule.forRoot([{ ttl: 60_000, limit: 600 }]),
     HealthModule,
     DiagnosticsModule,
+    AuditModule,
+    MailOutboxModule,
+    AuthModule,
+    UsersModule,
+    ShowsModule,
+    TokensModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: ThrottlerGuard },

@@ -5,6 +5,7 @@ import { QueuesModule } from './queues/queues.module';
 import { StorageModule } from './storage/storage.module';
 import { MailModule } from './mail/mail.module';
 import { DiagnosticsWorkerModule } from './diagnostics/diagnostics-worker.module';
+import { MailWorkerModule } from './mail/mail-worker.module';
 
 /** The worker process: queue processors only, no HTTP. */
 @Module({
@@ -15,6 +16,7 @@ import { DiagnosticsWorkerModule } from './diagnostics/diagnostics-worker.module
     StorageModule,
     MailModule,
     DiagnosticsWorkerModule,
+    MailWorkerModule,
   ],
 })
 export class WorkerModule {}

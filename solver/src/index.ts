@@ -1,5 +1,22 @@
 // Public entry of the Overshoot solver library. Exports by name.
-export type { Capture, Character, Clip, Pose, Regions, Skeleton } from './types.js';
+export type {
+  Capture,
+  Character,
+  Clip,
+  Controls,
+  Driver,
+  DriverSignal,
+  FitReport,
+  LinearDynamics,
+  Mode,
+  ModeFlag,
+  Pose,
+  PoseCorrectives,
+  Regions,
+  Skeleton,
+  SpectrumPeak,
+  TissueProfile,
+} from './types.js';
 export { SolverInputError, isSolverInputError } from './errors.js';
 export type { ErrorLocation, SolverErrorCode } from './errors.js';
 

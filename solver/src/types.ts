@@ -109,3 +109,137 @@ export interface Pose {
   /** Local translation per joint (3J). */
   translations: Float64Array;
 }
+
+// ─── Tissue profile, controls and take (learned by `learn`, used by `retarget` and live tuning) ───
+
+/** A motion signal of a driver joint, each three components in the joint's own frame. */
+export type DriverSignal = 'specificForce' | 'angularVelocity' | 'angularAcceleration';
+
+/** A joint whose motion drives the dynamics; contributes 3 inputs per signal. */
+export interface Driver {
+  /** Joint name in the source character's skeleton. */
+  joint: string;
+  /** Signals taken from it, in this order. */
+  signals: DriverSignal[];
+}
+
+/** Why a mode deserves a second look. */
+export type ModeFlag = 'real-negative-pole' | 'near-nyquist' | 'overdamped';
+
+/** One oscillation of a profile. */
+export interface Mode {
+  /** Natural frequency f_n = |s| / 2π, in hertz. */
+  frequencyHz: number;
+  /** Damping ratio ζ = −Re(s) / |s|. */
+  dampingRatio: number;
+  /** Name of the region whose vertices move most in this mode. */
+  region: string;
+  /** Share of the dynamic displacement energy this mode carries (all modes sum to 1). */
+  energyShare: number;
+  /** Observations, e.g. a mode near the Nyquist frequency. */
+  flags: ModeFlag[];
+}
+
+/** A peak of a region's power spectral density. */
+export interface SpectrumPeak {
+  region: string;
+  frequencyHz: number;
+  /** Power spectral density at the peak, m²/Hz. */
+  power: number;
+}
+
+/** How well a profile fits frames it never saw (the last 20 % of the capture). */
+export interface FitReport {
+  trainFrames: number;
+  heldOutFrames: number;
+  /** Normalised RMS error of one-step-ahead prediction of the coefficients. */
+  oneStepNrmse: number;
+  /** Normalised RMS error of a free run from the held-out start, driven by the inputs only. */
+  freeRunNrmse: number;
+  /** Share of held-out dynamic variance the free run explains. */
+  varianceExplained: number;
+  /** 1 − max |z| over the poles. */
+  stabilityMargin: number;
+  /** Shares of the unposed residual variance explained by the pose-driven and dynamic parts. */
+  poseShare: number;
+  dynamicShare: number;
+  /** Spectrum peaks per region (Welch PSD of the dynamic displacement). */
+  spectrumPeaks: SpectrumPeak[];
+}
+
+/** Pose-driven deformation: per vertex, a linear map from local pose features to a rest-space offset. */
+export interface PoseCorrectives {
+  /** Features per vertex (same for every vertex): 9 per influencing joint slot (entries of R − I). */
+  featuresPerVertex: number;
+  /** Joint index of each of the 4 slots per vertex (4N), usually the skin joints. */
+  featureJoints: Uint16Array;
+  /** Coefficients, vertex-major: vertex i, axis a (x, y, z), feature f at ((i·3 + a)·F + f) (N·3·F). */
+  coefficients: Float32Array;
+  /** Ridge strength chosen on held-out frames. */
+  ridgeLambda: number;
+}
+
+/**
+ * Second-order ARX dynamics on the basis coefficients c_t ∈ R^K with scaled inputs u_t ∈ R^M:
+ * c_t = A1 c_{t−1} + A2 c_{t−2} + B0 u_t + B1 u_{t−1}, matrices row-major.
+ */
+export interface LinearDynamics {
+  /** Basis size K. */
+  k: number;
+  /** Input count M (3 per driver signal). */
+  m: number;
+  a1: Float64Array;
+  a2: Float64Array;
+  b0: Float64Array;
+  b1: Float64Array;
+  /** Inputs are scaled as (u − inputMean) / inputScale before entering B0, B1. */
+  inputMean: Float64Array;
+  inputScale: Float64Array;
+}
+
+/** What the solver learned from one capture. */
+export interface TissueProfile {
+  formatVersion: 1;
+  /** Content hash of the serialised profile (hex). */
+  id: string;
+  name: string;
+  /** Rate the dynamics were identified at. */
+  fps: number;
+  /** Settings the profile was learned with (cut-off, caps, seeds…), for the record. */
+  settings: Record<string, number | string | boolean>;
+  /** The source character: rest mesh, skeleton, skin and regions (for transfer). */
+  source: Character;
+  drivers: Driver[];
+  /** Dynamic basis in the source's rest space: column k of length 3N at [k·3N, (k+1)·3N). */
+  basis: Float32Array;
+  /** Singular value of each basis column. */
+  singularValues: Float64Array;
+  correctives: PoseCorrectives;
+  dynamics: LinearDynamics;
+  modes: Mode[];
+  fitReport: FitReport;
+}
+
+/** The artist's controls of a retarget. */
+export interface Controls {
+  /** Scales all dynamic displacement (linear). */
+  gain: number;
+  /** Per-region gain by region name (missing regions: 1), blended smoothly at borders. */
+  regionGains: Record<string, number>;
+  /** Multiplies every mode's natural frequency. */
+  stiffness: number;
+  /** Multiplies every mode's damping ratio. */
+  damping: number;
+  /** Seconds the first pose is held before the shot so it starts at rest. */
+  prerollSeconds: number;
+  /** Dynamic similarity by size (on) or frequencies kept (off, stylised). */
+  physicalScaling: boolean;
+  /** Exponent of the length ratio for frequencies (−0.5 gravity-dominated; −1 same-material elastic). */
+  sizeExponent: number;
+  /** Indices into the profile's modes to silence. */
+  mutedModes: number[];
+  /** Indices into the profile's modes to play alone (empty: all). */
+  soloModes: number[];
+  /** Largest displacement of any vertex in metres, or null for no clamp. */
+  maxDisplacement: number | null;
+}

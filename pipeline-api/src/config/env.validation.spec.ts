@@ -27,6 +27,15 @@ describe('validateEnv', () => {
     );
   });
 
+  it('gives account settings that work on loopback without TLS', () => {
+    const env = validateEnv({});
+    expect(env.PUBLIC_URL).toBe('http://127.0.0.1:3000');
+    expect(env.COOKIE_SECURE).toBe(false);
+    expect(env.TRUST_PROXY).toBe('loopback');
+    expect(validateEnv({ COOKIE_SECURE: 'true' }).COOKIE_SECURE).toBe(true);
+    expect(() => validateEnv({ PUBLIC_URL: 'not a url' })).toThrow(/PUBLIC_URL/);
+  });
+
   it('rejects a short admin password', () => {
     expect(() => validateEnv({ ADMIN_PASSWORD: 'short' })).toThrow(/ADMIN_PASSWORD/);
   });

@@ -53,6 +53,22 @@ export class Env {
   @IsString() MAIL_FROM = 'Overshoot <overshoot@localhost>';
 
   @IsOptional() @IsString() WEB_DIST_DIR?: string;
+  /** The local mail sink's HTTP inbox, read by the development outbox route. */
+  @IsOptional() @IsUrl({ require_tld: false, protocols: ['http', 'https'] }) MAIL_SINK_URL?: string;
+
+  /** Where people open the web client; e-mailed links start with it. */
+  @IsUrl({ require_tld: false, protocols: ['http', 'https'] }) PUBLIC_URL = 'http://127.0.0.1:3000';
+  /** Send the session cookie over HTTPS only (set true behind TLS). */
+  @Transform(toBool) @IsBoolean() COOKIE_SECURE = false;
+  /** Express `trust proxy`: whose X-Forwarded-For to believe for the client address. */
+  @IsString() TRUST_PROXY = 'loopback';
+  @Type(() => Number) @IsInt() @Min(1) @Max(10_080) SESSION_IDLE_MINUTES = 480;
+  @Type(() => Number) @IsInt() @Min(1) @Max(2_160) SESSION_ABSOLUTE_HOURS = 168;
+  @Type(() => Number) @IsInt() @Min(1) @Max(1000) SIGN_IN_MAX_FAILURES_PER_EMAIL = 5;
+  @Type(() => Number) @IsInt() @Min(1) @Max(10_000) SIGN_IN_MAX_FAILURES_PER_IP = 30;
+  @Type(() => Number) @IsInt() @Min(10) @Max(86_400) SIGN_IN_WINDOW_SECONDS = 900;
+  /** Tries per e-mail before it is marked failed (SMTP faults are retried with backoff). */
+  @Type(() => Number) @IsInt() @Min(1) @Max(20) MAIL_MAX_ATTEMPTS = 5;
 
   @IsEmail({ require_tld: false }) ADMIN_EMAIL = 'admin@overshoot.localhost';
   @IsOptional() @IsString() @MinLength(12) ADMIN_PASSWORD?: string;

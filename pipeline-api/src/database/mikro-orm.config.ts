@@ -2,10 +2,28 @@ import { defineConfig } from '@mikro-orm/mariadb';
 import { Migrator } from '@mikro-orm/migrations';
 import type { Env } from '../config/env.validation';
 import { User } from '../users/entities/user.entity';
+import { Invitation } from '../users/entities/invitation.entity';
+import { Session } from '../auth/entities/session.entity';
+import { PasswordReset } from '../auth/entities/password-reset.entity';
+import { Show } from '../shows/entities/show.entity';
+import { Membership } from '../shows/entities/membership.entity';
+import { PipelineToken } from '../tokens/entities/pipeline-token.entity';
+import { EmailMessage } from '../mail/entities/email-message.entity';
+import { AuditEvent } from '../audit/entities/audit-event.entity';
 import { MIGRATIONS } from './migrations';
 
 /** Every entity the ORM knows. */
-export const ENTITIES = [User];
+export const ENTITIES = [
+  User,
+  Invitation,
+  Session,
+  PasswordReset,
+  Show,
+  Membership,
+  PipelineToken,
+  EmailMessage,
+  AuditEvent,
+];
 
 /** MikroORM options from the validated environment. */
 export function ormConfig(env: Env) {

@@ -1,4 +1,5 @@
 /** Every queue of the product, by name. */
 export const QUEUES = {
   diagnostics: 'diagnostics',
+  mail: 'mail',
 } as const;

@@ -3,7 +3,13 @@
 
 /** What kind of failure a domain error is, which the HTTP filter turns into a status. */
 export type DomainErrorKind =
-  'invalid' | 'not_found' | 'conflict' | 'forbidden' | 'unauthenticated' | 'unavailable';
+  | 'invalid'
+  | 'not_found'
+  | 'conflict'
+  | 'forbidden'
+  | 'unauthenticated'
+  | 'throttled'
+  | 'unavailable';
 
 /** An error with a stable code, a human sentence and optional details of where. */
 export class DomainError extends Error {

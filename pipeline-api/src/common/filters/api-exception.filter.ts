@@ -22,6 +22,7 @@ const KIND_STATUS: Record<DomainErrorKind, number> = {
   conflict: HttpStatus.CONFLICT,
   forbidden: HttpStatus.FORBIDDEN,
   unauthenticated: HttpStatus.UNAUTHORIZED,
+  throttled: HttpStatus.TOO_MANY_REQUESTS,
   unavailable: HttpStatus.SERVICE_UNAVAILABLE,
 };
 
@@ -48,6 +49,8 @@ export class ApiExceptionFilter implements ExceptionFilter {
     const res = ctx.getResponse<Response>();
     const req = ctx.getRequest<Request>();
     const { status, body } = this.toBody(exception, req);
+    const retry = (body.details as { retryAfterSeconds?: unknown } | undefined)?.retryAfterSeconds;
+    if (status === 429 && typeof retry === 'number') res.setHeader('Retry-After', String(retry));
     if (status >= 500)
       this.logger.error(`${req.method} ${req.url}: ${(exception as Error)?.stack ?? exception}`);
     res.status(status).json(body);

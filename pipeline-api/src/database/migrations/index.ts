@@ -1,8 +1,10 @@
 // Migrations in the order they apply. Add each new migration here (an explicit list works the
 // same from compiled JavaScript and from TypeScript under the test runner).
 import { Migration20261201000000_users } from './Migration20261201000000_users';
+import { Migration20261202000000_accounts } from './Migration20261202000000_accounts';
 
 /** Every migration, oldest first. */
 export const MIGRATIONS = [
   { name: 'Migration20261201000000_users', class: Migration20261201000000_users },
+  { name: 'Migration20261202000000_accounts', class: Migration20261202000000_accounts },
 ];

@@ -28,7 +28,7 @@ export class User {
   updatedAt: Date = new Date();
 
   @Property({ type: 'datetime', nullable: true })
-  disabledAt?: Date;
+  disabledAt?: Date | null;
 
   constructor(email: string, displayName: string, passwordHash: string, role: Role) {
     this.email = User.normaliseEmail(email);
