@@ -1,7 +1,7 @@
 // `npm start`: every service on loopback, the database migrated, the product served.
 import { stackConfig } from './stack/config.js';
 import { Stack } from './stack/stack.js';
-import { buildStale } from './stack/build.js';
+import { buildStale, generateSamples } from './stack/build.js';
 import { runSetup, startApiAndWorker } from './stack/api-processes.js';
 import { alive } from './stack/processes.js';
 
@@ -24,6 +24,7 @@ process.on('SIGTERM', () => void shutdown(0));
 try {
   await stack.up();
   buildStale(log);
+  generateSamples(log);
   runSetup(cfg);
   const { url } = await startApiAndWorker(stack);
   console.log(

@@ -3,7 +3,7 @@
 // `npx vitest run --project pipeline-api`.
 import { serviceEnv, stackConfig } from './stack/config.js';
 import { Stack } from './stack/stack.js';
-import { buildStale } from './stack/build.js';
+import { buildStale, generateSamples } from './stack/build.js';
 import { runSetup, startApiAndWorker } from './stack/api-processes.js';
 
 const cfg = stackConfig('test');
@@ -24,6 +24,7 @@ process.on('SIGTERM', () => void shutdown(0));
 try {
   await stack.up({ fresh: process.argv.includes('--fresh') });
   buildStale(log);
+  generateSamples(log);
   runSetup(cfg);
   const { url } = await startApiAndWorker(stack);
   log(`test stack up: API ${url}, database ${cfg.mariadb.database} on port ${cfg.mariadb.port}`);

@@ -5,7 +5,7 @@ import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { ROOT, serviceEnv, stackConfig } from './stack/config.js';
 import { Stack } from './stack/stack.js';
-import { buildStale } from './stack/build.js';
+import { buildStale, generateSamples } from './stack/build.js';
 import { runSetup, startApiAndWorker } from './stack/api-processes.js';
 
 const cfg = stackConfig('test');
@@ -43,6 +43,7 @@ let code: number;
 try {
   await stack.up({ fresh: true });
   buildStale(log);
+  generateSamples(log);
   runSetup(cfg);
   const { url } = await startApiAndWorker(stack);
   const artifacts = join(ROOT, 'test', 'artifacts');

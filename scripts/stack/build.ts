@@ -45,3 +45,11 @@ export function buildStale(log: (m: string) => void): string[] {
   }
   return built;
 }
+
+/** Generates the invented demo and test assets when their generator or the solver changed. */
+export function generateSamples(log: (m: string) => void): void {
+  log('checking the sample assets…');
+  const out = run('npm', ['run', '--silent', 'generate', '-w', 'assets-sample'], { cwd: ROOT });
+  const last = out.trim().split('\n').pop();
+  if (last) log(last);
+}
