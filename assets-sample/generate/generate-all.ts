@@ -12,7 +12,6 @@ import { COACH_TISSUE } from './capture/coach-tissue.js';
 import { groundTruth } from './capture/ground-truth.js';
 import { writeBvh } from './io/bvh-writer.js';
 import { INVENTED_NOTICE, stampGlb, type SampleLabel } from './io/stamp-glb.js';
-import { unbindCaptureMesh } from './io/unbind-capture-mesh.js';
 import { poolsideDrill, whistleAndBounce } from './motion/capture-scripts.js';
 import * as clips from './motion/clip-scripts.js';
 import type { MotionScript } from './motion/motion-script.js';
@@ -156,7 +155,7 @@ export async function generateAll(options: GenerateOptions): Promise<GeneratedSe
       notice: INVENTED_NOTICE,
     });
     const bytes = await writeCaptureGlb(cap.capture, { character: coach.character });
-    files.set(entry.file, await stampGlb(bytes, label('capture', { ...entry, noiseSeed }), unbindCaptureMesh)); // prettier-ignore
+    files.set(entry.file, await stampGlb(bytes, label('capture', { ...entry, noiseSeed })));
     files.set(entry.groundTruth, json(truth.json));
     files.set(entry.groundTruthBin, truth.bin);
     index.captures.push(entry);

@@ -1,5 +1,8 @@
 // Writes a capture to .glb: one morph target per frame (offsets from the base mesh), shown one
-// at a time by a STEP weights animation; optionally on a character with its skeleton's clip.
+// at a time by a STEP weights animation; optionally with a character's skeleton and its clip.
+// The frames hold posed positions and glTF applies morph targets before skinning, so the capture
+// mesh is never bound to the skin (it would be posed twice); the skin stays in the file so that
+// readers find the skeleton the joint animation drives.
 import { Document } from '@gltf-transform/core';
 import { SolverInputError } from '../errors.js';
 import type { Capture, Character } from '../types.js';
@@ -40,6 +43,12 @@ export async function writeCaptureGlb(
     meshNode = written.meshNode.setName(capture.name);
     prim = meshNode.getMesh()!.setName(capture.name).listPrimitives()[0];
     base = character.restPositions;
+    meshNode.setSkin(null);
+    for (const semantic of ['JOINTS_0', 'WEIGHTS_0']) {
+      const accessor = prim.getAttribute(semantic);
+      prim.setAttribute(semantic, null);
+      accessor?.dispose();
+    }
     jointNodes = new Map(character.skeleton.names.map((name, j) => [name, written.joints[j]]));
   } else {
     prim = doc
