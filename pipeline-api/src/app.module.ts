@@ -15,6 +15,11 @@ import { AuthModule } from './auth/auth.module';
 import { UsersModule } from './users/users.module';
 import { ShowsModule } from './shows/shows.module';
 import { TokensModule } from './tokens/tokens.module';
+import { AssetsModule } from './assets/assets.module';
+import { LibraryModule } from './library/library.module';
+import { ShotsModule } from './shots/shots.module';
+import { TakesModule } from './takes/takes.module';
+import { ReviewsModule } from './reviews/reviews.module';
 
 /** The HTTP API. Long work is queued for the worker process, never run here. */
 @Module({
@@ -33,6 +38,11 @@ import { TokensModule } from './tokens/tokens.module';
     UsersModule,
     ShowsModule,
     TokensModule,
+    AssetsModule,
+    LibraryModule,
+    ShotsModule,
+    TakesModule,
+    ReviewsModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: ThrottlerGuard },

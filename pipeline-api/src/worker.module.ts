@@ -6,6 +6,7 @@ import { StorageModule } from './storage/storage.module';
 import { MailModule } from './mail/mail.module';
 import { DiagnosticsWorkerModule } from './diagnostics/diagnostics-worker.module';
 import { MailWorkerModule } from './mail/mail-worker.module';
+import { IngestWorkerModule } from './assets/ingest-worker.module';
 
 /** The worker process: queue processors only, no HTTP. */
 @Module({
@@ -17,6 +18,7 @@ import { MailWorkerModule } from './mail/mail-worker.module';
     MailModule,
     DiagnosticsWorkerModule,
     MailWorkerModule,
+    IngestWorkerModule,
   ],
 })
 export class WorkerModule {}

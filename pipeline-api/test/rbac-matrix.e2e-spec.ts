@@ -71,7 +71,8 @@ describe('RBAC matrix: every route × every kind of caller', () => {
   const url = (route: string) =>
     route.replace(/:(\w+)/g, (_, name: string) => {
       if (name === 'showId') return show.id;
-      if (['userId', 'tokenId', 'id'].includes(name)) return otherId;
+      const ids = ['userId', 'tokenId', 'id', 'assetId', 'characterId', 'captureId', 'clipId'];
+      if ([...ids, 'profileId', 'shotId', 'takeId', 'noteId'].includes(name)) return otherId;
       throw new Error(`no placeholder for :${name}; add one in rbac-matrix.e2e-spec.ts`);
     });
 

@@ -15,6 +15,9 @@ import {
   validateSync,
 } from 'class-validator';
 
+/** One mebibyte. */
+const MB = 1024 * 1024;
+
 const toBool = ({ value }: { value: unknown }) =>
   typeof value === 'string' ? value === 'true' || value === '1' : value;
 
@@ -74,6 +77,17 @@ export class Env {
   @IsOptional() @IsString() @MinLength(12) ADMIN_PASSWORD?: string;
 
   @Type(() => Number) @IsInt() @Min(1) @Max(64) WORKER_CONCURRENCY = 2;
+
+  /** Largest file per asset kind, in bytes (a declared size above it is refused at once). */
+  @Type(() => Number) @IsInt() @Min(1) UPLOAD_MAX_CHARACTER_BYTES = 200 * MB;
+  @Type(() => Number) @IsInt() @Min(1) UPLOAD_MAX_CAPTURE_BYTES = 2048 * MB;
+  @Type(() => Number) @IsInt() @Min(1) UPLOAD_MAX_CLIP_BYTES = 100 * MB;
+  /** Size of each multipart part; S3 wants at least 5 MiB for every part but the last. */
+  @Type(() => Number) @IsInt() @Min(5 * MB) @Max(5120 * MB) UPLOAD_PART_BYTES = 16 * MB;
+  /** How long a presigned upload or download URL stays valid. */
+  @Type(() => Number) @IsInt() @Min(60) @Max(604_800) PRESIGNED_URL_SECONDS = 3600;
+  /** Tries per ingest job for transient faults (bad files are never retried). */
+  @Type(() => Number) @IsInt() @Min(1) @Max(20) INGEST_MAX_ATTEMPTS = 3;
   @Type(() => Number) @IsInt() @Min(100) @Max(30_000) HEALTH_TIMEOUT_MS = 2000;
 }
 

@@ -10,6 +10,16 @@ import { Membership } from '../shows/entities/membership.entity';
 import { PipelineToken } from '../tokens/entities/pipeline-token.entity';
 import { EmailMessage } from '../mail/entities/email-message.entity';
 import { AuditEvent } from '../audit/entities/audit-event.entity';
+import { Asset } from '../assets/entities/asset.entity';
+import { Character } from '../library/entities/character.entity';
+import { Capture } from '../library/entities/capture.entity';
+import { Clip } from '../library/entities/clip.entity';
+import { TissueProfile } from '../library/entities/tissue-profile.entity';
+import { Shot } from '../shots/entities/shot.entity';
+import { RetargetJob } from '../jobs/entities/retarget-job.entity';
+import { Take } from '../takes/entities/take.entity';
+import { Note } from '../reviews/entities/note.entity';
+import { ReviewDecision } from '../reviews/entities/review-decision.entity';
 import { MIGRATIONS } from './migrations';
 
 /** Every entity the ORM knows. */
@@ -23,6 +33,16 @@ export const ENTITIES = [
   PipelineToken,
   EmailMessage,
   AuditEvent,
+  Asset,
+  Character,
+  Capture,
+  Clip,
+  TissueProfile,
+  Shot,
+  RetargetJob,
+  Take,
+  Note,
+  ReviewDecision,
 ];
 
 /** MikroORM options from the validated environment. */

@@ -2,4 +2,5 @@
 export const QUEUES = {
   diagnostics: 'diagnostics',
   mail: 'mail',
+  ingest: 'ingest',
 } as const;

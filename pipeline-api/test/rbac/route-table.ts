@@ -30,6 +30,17 @@ const ANYONE: readonly Role[] = [
   Role.Supervisor,
   Role.Producer,
 ];
+/** product.md: technical artists upload characters, captures and clips and create shots. */
+const TA: readonly Role[] = [Role.TechnicalArtist];
+/**
+ * Captures are biometric data: the technical artists who upload and learn from them,
+ * supervisors, and producers (who read everything in their shows); not animators.
+ */
+const CAPTURE_READERS: readonly Role[] = [Role.TechnicalArtist, Role.Supervisor, Role.Producer];
+/** product.md: animators and supervisors write notes. */
+const NOTE_WRITERS: readonly Role[] = [Role.Animator, Role.Supervisor];
+/** product.md: supervisors resolve notes and decide on takes. */
+const SUPERVISORS: readonly Role[] = [Role.Supervisor];
 
 /** The expectation table. */
 export const ROUTE_TABLE: RouteRow[] = [
@@ -66,4 +77,60 @@ export const ROUTE_TABLE: RouteRow[] = [
   { route: 'GET /api/admin/shows/:showId/tokens', roles: ADMINS },
   { route: 'DELETE /api/admin/shows/:showId/tokens/:tokenId', roles: ADMINS },
   { route: 'GET /api/admin/outbox', roles: ADMINS },
+
+  // Uploads (technical artists) and upload reports (the roles that may see captures).
+  { route: 'POST /api/shows/:showId/uploads', roles: TA },
+  { route: 'POST /api/shows/:showId/uploads/:assetId/parts', roles: TA },
+  { route: 'POST /api/shows/:showId/uploads/:assetId/complete', roles: TA },
+  { route: 'DELETE /api/shows/:showId/uploads/:assetId', roles: TA },
+  { route: 'GET /api/shows/:showId/assets', roles: CAPTURE_READERS },
+  { route: 'GET /api/shows/:showId/assets/:assetId', roles: CAPTURE_READERS },
+
+  // Library: characters, clips and profiles for every member; captures for fewer.
+  { route: 'GET /api/shows/:showId/characters', roles: ANYONE },
+  { route: 'GET /api/shows/:showId/characters/:characterId', roles: ANYONE },
+  { route: 'GET /api/shows/:showId/characters/:characterId/file', roles: ANYONE },
+  { route: 'GET /api/shows/:showId/clips', roles: ANYONE },
+  { route: 'GET /api/shows/:showId/clips/:clipId', roles: ANYONE },
+  { route: 'GET /api/shows/:showId/clips/:clipId/file', roles: ANYONE },
+  { route: 'GET /api/shows/:showId/profiles', roles: ANYONE },
+  { route: 'GET /api/shows/:showId/profiles/:profileId', roles: ANYONE },
+  { route: 'GET /api/shows/:showId/captures', roles: CAPTURE_READERS },
+  { route: 'GET /api/shows/:showId/captures/:captureId', roles: CAPTURE_READERS },
+  { route: 'GET /api/shows/:showId/captures/:captureId/file', roles: CAPTURE_READERS },
+  // product.md: deleting a capture is for admins and technical artists.
+  { route: 'DELETE /api/shows/:showId/captures/:captureId', roles: TA },
+
+  // Shots: everyone reads (tokens too, e.g. the render farm finding its shot); technical
+  // artists create; producers set due dates and assignees; tracking views for every member.
+  { route: 'GET /api/shows/:showId/shots', roles: ANYONE, token: 'any' },
+  { route: 'GET /api/shows/:showId/shots/export', roles: ANYONE },
+  { route: 'GET /api/shows/:showId/shots/summary', roles: ANYONE },
+  { route: 'GET /api/shows/:showId/shots/throughput', roles: ANYONE },
+  { route: 'POST /api/shows/:showId/shots', roles: TA },
+  { route: 'GET /api/shows/:showId/shots/:shotId', roles: ANYONE, token: 'any' },
+  { route: 'PATCH /api/shows/:showId/shots/:shotId', roles: [Role.TechnicalArtist, Role.Producer] },
+  // product.md: producers manage render state by hand; the render farm reports it by token.
+  {
+    route: 'PUT /api/shows/:showId/shots/:shotId/render-state',
+    roles: [Role.Producer],
+    token: TokenScope.RenderWrite,
+  },
+
+  // Takes: everyone reads; tokens with takes:read.
+  {
+    route: 'GET /api/shows/:showId/shots/:shotId/takes',
+    roles: ANYONE,
+    token: TokenScope.TakesRead,
+  },
+  { route: 'GET /api/shows/:showId/takes/:takeId', roles: ANYONE, token: TokenScope.TakesRead },
+
+  // Review.
+  { route: 'GET /api/shows/:showId/takes/:takeId/notes', roles: ANYONE },
+  { route: 'POST /api/shows/:showId/takes/:takeId/notes', roles: NOTE_WRITERS },
+  { route: 'PATCH /api/shows/:showId/notes/:noteId', roles: NOTE_WRITERS },
+  { route: 'POST /api/shows/:showId/notes/:noteId/resolve', roles: SUPERVISORS },
+  { route: 'POST /api/shows/:showId/notes/:noteId/reopen', roles: SUPERVISORS },
+  { route: 'GET /api/shows/:showId/takes/:takeId/decisions', roles: ANYONE },
+  { route: 'POST /api/shows/:showId/takes/:takeId/decisions', roles: SUPERVISORS },
 ];

@@ -6,6 +6,7 @@ export type DomainErrorKind =
   | 'invalid'
   | 'not_found'
   | 'conflict'
+  | 'too_large'
   | 'forbidden'
   | 'unauthenticated'
   | 'throttled'

@@ -47,6 +47,99 @@ export const ERROR_CODES = {
   SIGN_IN_UNAVAILABLE: { status: 503, description: 'Sign-in cannot check its limits right now.' },
   MAIL_UNAVAILABLE: { status: 503, description: 'The e-mail queue cannot be reached.' },
   OUTBOX_UNAVAILABLE: { status: 503, description: 'The local mail sink cannot be read.' },
+  // Uploads and the library.
+  UPLOAD_TOO_LARGE: {
+    status: 413,
+    description: 'The declared file size is above the limit for its kind; `details.limit` says it.',
+  },
+  UPLOAD_FILE_TYPE: {
+    status: 400,
+    description:
+      'The file name does not fit the kind (characters and captures: .glb; clips: .bvh or .glb).',
+  },
+  CONSENT_REQUIRED: {
+    status: 400,
+    description:
+      'A capture upload needs the consent record: performer code, scope and expiry date.',
+  },
+  CONSENT_EXPIRED: { status: 400, description: "The consent record's expiry date has passed." },
+  UPLOAD_NOT_OPEN: {
+    status: 409,
+    description: 'The upload is not waiting for parts (completed, aborted or never started).',
+  },
+  UPLOAD_PARTS_INVALID: {
+    status: 400,
+    description: 'The parts listed do not match what was uploaded; `details` says which.',
+  },
+  UPLOAD_SIZE_MISMATCH: {
+    status: 400,
+    description: 'The stored file is not the declared size; the file was deleted.',
+  },
+  STORAGE_UNAVAILABLE: { status: 503, description: 'The S3 store cannot be reached; try again.' },
+  INGEST_UNAVAILABLE: {
+    status: 503,
+    description: 'The ingest queue cannot be reached; try again.',
+  },
+  ASSET_NOT_FOUND: { status: 404, description: 'No such asset in this show.' },
+  ASSET_NOT_READY: {
+    status: 409,
+    description: 'The file has not passed its check (pending or rejected).',
+  },
+  CHARACTER_NOT_FOUND: { status: 404, description: 'No such character in this show.' },
+  CHARACTER_NOT_READY: { status: 409, description: 'The character has not passed its check yet.' },
+  CAPTURE_NOT_FOUND: { status: 404, description: 'No such capture in this show.' },
+  CAPTURE_DELETED: {
+    status: 409,
+    description: 'The capture was deleted; only its record remains.',
+  },
+  CAPTURE_CONSENT_EXPIRED: {
+    status: 409,
+    description: "The capture's consent has expired: no new learning from it.",
+  },
+  CLIP_NOT_FOUND: { status: 404, description: 'No such clip in this show.' },
+  CLIP_NOT_READY: { status: 409, description: 'The clip has not passed its check yet.' },
+  PROFILE_NOT_FOUND: { status: 404, description: 'No such tissue profile in this show.' },
+  // Shots and tracking.
+  SHOT_NOT_FOUND: { status: 404, description: 'No such shot in this show.' },
+  SHOT_CODE_TAKEN: { status: 409, description: 'Another shot of the show has this code.' },
+  SHOT_FRAME_RANGE_INVALID: {
+    status: 400,
+    description: 'The frame range is empty or outside the clip; `details` gives the bounds.',
+  },
+  SHOT_ASSIGNEE_INVALID: { status: 400, description: 'An assignee is not a member of the show.' },
+  SHOT_FIELDS_NOT_ALLOWED: {
+    status: 403,
+    description: "The caller's role may change only some fields (producers: due date, assignees).",
+  },
+  RENDER_STATE_INVALID_TRANSITION: {
+    status: 409,
+    description: 'The render state cannot move that way; `details.allowed` lists the moves.',
+  },
+  JOB_STATE_INVALID_TRANSITION: {
+    status: 409,
+    description: 'The retarget job cannot move that way.',
+  },
+  // Takes and review.
+  TAKE_NOT_FOUND: { status: 404, description: 'No such take in this show.' },
+  JOB_NOT_FINISHED: { status: 409, description: 'A take comes only from a job that has solved.' },
+  TAKE_NOT_SOLVED: {
+    status: 409,
+    description: "The take's job has not solved; it cannot be reviewed.",
+  },
+  TAKE_ALREADY_DECIDED: {
+    status: 409,
+    description: 'The take has a decision already; review the newer take.',
+  },
+  NOTE_NOT_FOUND: { status: 404, description: 'No such note in this show.' },
+  NOTE_FRAME_OUT_OF_RANGE: {
+    status: 400,
+    description: "The frame is outside the shot's frame range; `details` gives the range.",
+  },
+  NOTE_MARK_INVALID: {
+    status: 400,
+    description: 'The drawn mark is not strokes of points in [0, 1]; `details` says where.',
+  },
+  NOTE_NOT_AUTHOR: { status: 403, description: 'Only the author of a note may edit it.' },
 } as const satisfies Record<string, ErrorCodeInfo>;
 
 /** A code of the catalogue. */

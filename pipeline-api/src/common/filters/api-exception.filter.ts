@@ -20,6 +20,7 @@ const KIND_STATUS: Record<DomainErrorKind, number> = {
   invalid: HttpStatus.BAD_REQUEST,
   not_found: HttpStatus.NOT_FOUND,
   conflict: HttpStatus.CONFLICT,
+  too_large: HttpStatus.PAYLOAD_TOO_LARGE,
   forbidden: HttpStatus.FORBIDDEN,
   unauthenticated: HttpStatus.UNAUTHORIZED,
   throttled: HttpStatus.TOO_MANY_REQUESTS,

@@ -2,9 +2,13 @@
 // same from compiled JavaScript and from TypeScript under the test runner).
 import { Migration20261201000000_users } from './Migration20261201000000_users';
 import { Migration20261202000000_accounts } from './Migration20261202000000_accounts';
+import { Migration20261203000000_library } from './Migration20261203000000_library';
+import { Migration20261204000000_production } from './Migration20261204000000_production';
 
 /** Every migration, oldest first. */
 export const MIGRATIONS = [
   { name: 'Migration20261201000000_users', class: Migration20261201000000_users },
   { name: 'Migration20261202000000_accounts', class: Migration20261202000000_accounts },
+  { name: 'Migration20261203000000_library', class: Migration20261203000000_library },
+  { name: 'Migration20261204000000_production', class: Migration20261204000000_production },
 ];
