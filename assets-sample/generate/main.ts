@@ -1,5 +1,6 @@
 // `npm run generate -w @overshoot/assets-sample`: writes the invented sample files into files/.
-// Skips the work (in well under a second) when files/manifest.json shows they are current.
+// Skips the work (in well under a second) when files/manifest.json shows they are current;
+// `-- --force` generates anyway.
 import { mkdirSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { dirname, join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -27,7 +28,7 @@ async function main(): Promise<void> {
   const started = Date.now();
   const hash = inputsHash(GENERATOR_DIR, SEED);
   const old = readManifest(FILES_DIR);
-  if (isCurrent(FILES_DIR, old, hash)) {
+  if (!process.argv.includes('--force') && isCurrent(FILES_DIR, old, hash)) {
     const mb = (old!.totalBytes / 1e6).toFixed(1);
     console.log(`[assets-sample] sample files are current (${old!.files.length} files, ${mb} MB)`);
     return;

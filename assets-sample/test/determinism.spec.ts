@@ -45,6 +45,9 @@ describe('generator', () => {
     const { files } = await generateAll({ seed: SEED });
     const listed = manifest().files.map((f) => f.path);
     expect([...files.keys()].sort()).toEqual(listed);
-    for (const [path, bytes] of files) expect(same(bytes, fileBytes(path)), path).toBe(true);
+    for (const [path, bytes] of files) {
+      const hint = `${path} differs from a fresh generation: run npm run generate -w assets-sample -- --force`;
+      expect(same(bytes, fileBytes(path)), hint).toBe(true);
+    }
   }, 60_000);
 });
