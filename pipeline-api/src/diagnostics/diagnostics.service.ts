@@ -33,15 +33,17 @@ export class DiagnosticsService {
 
   /** Reads one ping's state, progress and result. */
   async get(id: string): Promise<PingView> {
+    // State first, then the job: read the other way round, a job finishing in between would show
+    // as completed without its result.
+    const state = await this.queue.getJobState(id);
     const job = await this.queue.getJob(id);
-    if (!job)
+    if (!job || state === 'unknown')
       throw new DomainError(
         'not_found',
         'PING_NOT_FOUND',
         `No diagnostic ping ${id}; it may have expired.`,
         { id },
       );
-    const state = await job.getState();
     const progress =
       typeof job.progress === 'object' && job.progress !== null
         ? (job.progress as unknown as JobProgress)
