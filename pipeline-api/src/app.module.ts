@@ -20,6 +20,7 @@ import { LibraryModule } from './library/library.module';
 import { ShotsModule } from './shots/shots.module';
 import { TakesModule } from './takes/takes.module';
 import { ReviewsModule } from './reviews/reviews.module';
+import { EventsModule } from './events/events.module';
 
 /** The HTTP API. Long work is queued for the worker process, never run here. */
 @Module({
@@ -43,6 +44,7 @@ import { ReviewsModule } from './reviews/reviews.module';
     ShotsModule,
     TakesModule,
     ReviewsModule,
+    EventsModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: ThrottlerGuard },

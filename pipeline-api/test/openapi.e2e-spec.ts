@@ -7,7 +7,7 @@ interface Operation {
   'x-roles'?: string[];
   'x-token-scope'?: string;
   'x-access'?: { public: boolean };
-  responses: Record<string, { description: string }>;
+  responses: Record<string, { description: string; content?: Record<string, unknown> }>;
 }
 
 describe('OpenAPI document', () => {
@@ -45,5 +45,29 @@ describe('OpenAPI document', () => {
     expect(paths['/api/auth/sign-in'].post.responses['429'].description).toContain(
       '`SIGN_IN_THROTTLED`',
     );
+  });
+
+  it('names each error code once per status, and answers errors as JSON', () => {
+    const problems = operations().flatMap(({ name, op }) =>
+      Object.entries(op.responses)
+        .filter(([status]) => Number(status) >= 400)
+        .flatMap(([status, r]) => {
+          const codes = r.description.match(/`[A-Z0-9_]+`/g) ?? [];
+          const out: string[] = [];
+          if (new Set(codes).size !== codes.length) out.push(`${name} ${status}: codes repeated`);
+          const types = Object.keys(r.content ?? { 'application/json': {} });
+          if (types.join() !== 'application/json') out.push(`${name} ${status}: ${types.join()}`);
+          return out;
+        }),
+    );
+    expect(problems).toEqual([]);
+  });
+
+  it('documents the live event stream with who may watch it', () => {
+    const events = paths['/api/shows/{showId}/events'].get;
+    expect(events['x-roles']).toContain('animator');
+    expect(events['x-token-scope']).toBe('any');
+    expect(Object.keys(events.responses['200'].content ?? {})).toEqual(['text/event-stream']);
+    expect(events.responses['404'].description).toContain('`SHOW_NOT_FOUND`');
   });
 });

@@ -89,6 +89,8 @@ export class Env {
   /** Tries per ingest job for transient faults (bad files are never retried). */
   @Type(() => Number) @IsInt() @Min(1) @Max(20) INGEST_MAX_ATTEMPTS = 3;
   @Type(() => Number) @IsInt() @Min(100) @Max(30_000) HEALTH_TIMEOUT_MS = 2000;
+  /** Seconds between keep-alive comments (and access re-checks) on live event streams. */
+  @Type(() => Number) @IsInt() @Min(1) @Max(300) EVENTS_HEARTBEAT_SECONDS = 15;
 }
 
 /** Validates `process.env`; throws one message listing every bad variable. */

@@ -1,6 +1,11 @@
 // The shot list's filter and sort as MikroORM conditions, shared by the list and the CSV export
 // so both return the same rows.
-import type { FilterQuery, QueryOrderMap } from '@mikro-orm/core';
+import {
+  LoadStrategy,
+  type FilterQuery,
+  type FindOptions,
+  type QueryOrderMap,
+} from '@mikro-orm/core';
 import { ReviewState } from '../takes/review-state';
 import type { Shot } from './entities/shot.entity';
 import type { ShotFilterQuery } from './dto/list-shots.query';
@@ -38,4 +43,23 @@ export function shotOrder(sort = 'sequence:asc,code:asc'): QueryOrderMap<Shot>[]
     return { [field]: dir } as QueryOrderMap<Shot>;
   });
   return [...order, { id: 'asc' }];
+}
+
+/**
+ * Find options for one page of shots with their assignees. The assignees load in a second query
+ * (`where shot_id in (…page…)`): joined into a limited query, MikroORM pages through a JSON
+ * subquery that the database checks against every row of the shots table, of every show.
+ */
+export function shotPage(
+  sort: string | undefined,
+  limit: number,
+  offset: number,
+): FindOptions<Shot, 'assignees'> {
+  return {
+    populate: ['assignees'],
+    strategy: LoadStrategy.SELECT_IN,
+    orderBy: shotOrder(sort),
+    limit,
+    offset,
+  };
 }

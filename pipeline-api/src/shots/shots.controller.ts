@@ -1,5 +1,5 @@
 import { Body, Controller, Get, Param, Patch, Post, Put, Query, Res } from '@nestjs/common';
-import { ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
+import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { Allow, AllowToken, ANY_ROLE } from '../common/decorators/access.decorators';
 import { ApiErrors } from '../common/decorators/api-errors.decorator';
@@ -36,7 +36,11 @@ export class ShotsController {
   /** The same rows as the list with the same filters and sort, all pages, as CSV. */
   @Get('export')
   @Allow(...ANY_ROLE)
-  @ApiProduces('text/csv')
+  // Only the file itself is CSV; refusals are JSON like everywhere else.
+  @ApiOkResponse({
+    description: 'The shot table as CSV.',
+    content: { 'text/csv': { schema: { type: 'string' } } },
+  })
   @ApiOperation({ summary: 'Export the shot table as CSV (streamed)' })
   @ApiErrors('VALIDATION_FAILED', 'SHOW_NOT_FOUND')
   async export(

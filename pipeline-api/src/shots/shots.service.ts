@@ -15,7 +15,7 @@ import { characterNotFound, clipNotFound } from '../library/library-errors';
 import { Shot } from './entities/shot.entity';
 import { assertRenderTransition, type RenderState } from './render-state';
 import { shotView, type ShotView } from './shot-view';
-import { shotFilter, shotOrder } from './shot-query';
+import { shotFilter, shotPage } from './shot-query';
 import type { CreateShotDto, UpdateShotDto } from './dto/shot-fields.dto';
 import type { ListShotsQuery } from './dto/list-shots.query';
 
@@ -47,12 +47,11 @@ export class ShotsService {
     const page = q.page ?? 1;
     const pageSize = q.pageSize ?? 50;
     const today = todayUtc();
-    const [rows, total] = await this.em.findAndCount(Shot, shotFilter(showId, q, today), {
-      populate: ['assignees'],
-      orderBy: shotOrder(q.sort),
-      limit: pageSize,
-      offset: (page - 1) * pageSize,
-    });
+    const [rows, total] = await this.em.findAndCount(
+      Shot,
+      shotFilter(showId, q, today),
+      shotPage(q.sort, pageSize, (page - 1) * pageSize),
+    );
     return { items: rows.map((s) => shotView(s, today)), total, page, pageSize };
   }
 

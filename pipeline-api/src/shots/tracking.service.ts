@@ -7,7 +7,7 @@ import { RenderState } from './render-state';
 import { JobState } from '../jobs/job-state';
 import { ReviewState } from '../takes/review-state';
 import { Shot } from './entities/shot.entity';
-import { shotFilter, shotOrder } from './shot-query';
+import { shotFilter, shotOrder, shotPage } from './shot-query';
 import { shotView, type ShotView } from './shot-view';
 import { isoWeek, weekStart } from './iso-week';
 import { csvLine } from './csv';
@@ -140,18 +140,12 @@ export class TrackingService {
   async exportCsv(showId: string, filter: ShotFilterQuery, out: Writable): Promise<void> {
     const today = todayUtc();
     const where = shotFilter(showId, filter, today);
-    const orderBy = shotOrder(filter.sort);
     const write = async (line: string) => {
       if (!out.write(line)) await once(out, 'drain');
     };
     await write(csvLine(CSV_HEADER));
     for (let offset = 0; ; offset += EXPORT_BATCH) {
-      const batch = await this.em.find(Shot, where, {
-        populate: ['assignees'],
-        orderBy,
-        limit: EXPORT_BATCH,
-        offset,
-      });
+      const batch = await this.em.find(Shot, where, shotPage(filter.sort, EXPORT_BATCH, offset));
       for (const shot of batch) await write(csvLine(csvRow(shotView(shot, today))));
       this.em.clear();
       if (batch.length < EXPORT_BATCH) break;

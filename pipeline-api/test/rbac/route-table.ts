@@ -20,6 +20,8 @@ export interface RouteRow {
   body?: object;
   /** The call ends the caller's session: sign in afresh for it. */
   freshSession?: boolean;
+  /** The route answers with an endless event stream: read the status, then hang up. */
+  stream?: boolean;
 }
 
 const PUBLIC = 'public';
@@ -133,4 +135,8 @@ export const ROUTE_TABLE: RouteRow[] = [
   { route: 'POST /api/shows/:showId/notes/:noteId/reopen', roles: SUPERVISORS },
   { route: 'GET /api/shows/:showId/takes/:takeId/decisions', roles: ANYONE },
   { route: 'POST /api/shows/:showId/takes/:takeId/decisions', roles: SUPERVISORS },
+
+  // Live progress: every member of the show follows its jobs; any token of the show may too
+  // (a pipeline script waiting for its job). Upload progress inside is narrower (see events/).
+  { route: 'GET /api/shows/:showId/events', roles: ANYONE, token: 'any', stream: true },
 ];

@@ -3,6 +3,7 @@ import { Injectable, Logger } from '@nestjs/common';
 import { MikroORM, type EntityManager } from '@mikro-orm/core';
 import { UnrecoverableError } from 'bullmq';
 import { StorageService } from '../../storage/storage.service';
+import { JobEventsPublisher } from '../../events/job-events-publisher';
 import { Character } from '../../library/entities/character.entity';
 import { Capture } from '../../library/entities/capture.entity';
 import { Clip } from '../../library/entities/clip.entity';
@@ -10,7 +11,7 @@ import { Asset, AssetKind, AssetState, type AssetProgress } from '../entities/as
 import { BadFile, readAsset, type AssetFacts } from './read-asset';
 import type { IngestResult } from './ingest-job';
 
-/** Reports progress to the job (and so to whoever polls the asset). */
+/** Reports progress to the job (the asset row and the live events carry it too). */
 export type ProgressSink = (p: AssetProgress) => Promise<void>;
 
 /**
@@ -25,6 +26,7 @@ export class IngestService {
   constructor(
     private readonly orm: MikroORM,
     private readonly storage: StorageService,
+    private readonly events: JobEventsPublisher,
   ) {}
 
   /**
@@ -49,6 +51,7 @@ export class IngestService {
         asset.progress = p;
         await em.nativeUpdate(Asset, { id: asset.id }, { progress: p });
         await progress(p);
+        await this.publish(asset);
       };
       const bytes = await this.download(asset, report);
       await report({ stage: 'validating', percent: 60 });
@@ -113,6 +116,18 @@ export class IngestService {
     return Buffer.concat(chunks, received);
   }
 
+  /** The asset's progress and state as a live event of its show. */
+  private publish(asset: Asset): Promise<void> {
+    const { stage, percent } = asset.progress ?? { stage: asset.state, percent: 0 };
+    return this.events.assetProgress(asset.show.id, {
+      assetId: asset.id,
+      kind: asset.kind,
+      stage,
+      percent,
+      state: asset.state,
+    });
+  }
+
   private async readAll(key: string): Promise<Uint8Array> {
     const chunks: Buffer[] = [];
     for await (const chunk of await this.storage.stream(key)) chunks.push(chunk as Buffer);
@@ -147,6 +162,7 @@ export class IngestService {
     asset.validationReport = null;
     asset.progress = { stage: 'ready', percent: 100 };
     await em.flush();
+    await this.publish(asset);
   }
 
   /** Deletes the object first (a retry then finds no file) and records the report. */
@@ -154,6 +170,7 @@ export class IngestService {
     await this.storage.delete(asset.s3Key);
     asset.reject({ code: bad.code, message: bad.message, where: bad.where });
     await em.flush();
+    await this.publish(asset);
     this.logger.warn(`asset ${asset.id} rejected: ${bad.code} ${bad.message}`);
   }
 }

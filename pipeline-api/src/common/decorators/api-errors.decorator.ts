@@ -3,6 +3,8 @@ import { METHOD_METADATA } from '@nestjs/common/constants';
 import { ERROR_CODES, type ErrorCode } from '../errors/error-codes';
 
 const CODES_KEY = 'overshoot:errorCodes';
+/** Where @nestjs/swagger keeps a handler's responses (its `SWAGGER_RESPONSES`, not exported). */
+const SWAGGER_RESPONSES = 'swagger/apiResponse';
 
 /** The error body every route returns, for the OpenAPI document. */
 export class ApiErrorDto {
@@ -13,13 +15,17 @@ export class ApiErrorDto {
 }
 
 // Several decorators add codes to one route (access rules and the route's own): keep them all
-// on the handler and re-emit one response per status each time, so the last one wins complete.
+// on the handler and re-emit one response per status each time. Swagger appends a repeated
+// status's description to the one before, so the earlier entry is dropped first.
 function addCodes(handler: object, codes: ErrorCode[]): void {
   const all = new Set<ErrorCode>([...(Reflect.getMetadata(CODES_KEY, handler) ?? []), ...codes]);
   Reflect.defineMetadata(CODES_KEY, [...all], handler);
   const byStatus = new Map<number, ErrorCode[]>();
   for (const c of all)
     byStatus.set(ERROR_CODES[c].status, [...(byStatus.get(ERROR_CODES[c].status) ?? []), c]);
+  const responses = { ...(Reflect.getMetadata(SWAGGER_RESPONSES, handler) ?? {}) };
+  for (const status of byStatus.keys()) delete responses[status];
+  Reflect.defineMetadata(SWAGGER_RESPONSES, responses, handler);
   for (const [status, list] of byStatus) {
     const description = list.map((c) => `\`${c}\`: ${ERROR_CODES[c].description}`).join(' ');
     const descriptor = { value: handler } as PropertyDescriptor;

@@ -4,6 +4,7 @@ import { Migration20261201000000_users } from './Migration20261201000000_users';
 import { Migration20261202000000_accounts } from './Migration20261202000000_accounts';
 import { Migration20261203000000_library } from './Migration20261203000000_library';
 import { Migration20261204000000_production } from './Migration20261204000000_production';
+import { Migration20261205000000_shot_list_indexes } from './Migration20261205000000_shot_list_indexes';
 
 /** Every migration, oldest first. */
 export const MIGRATIONS = [
@@ -11,4 +12,8 @@ export const MIGRATIONS = [
   { name: 'Migration20261202000000_accounts', class: Migration20261202000000_accounts },
   { name: 'Migration20261203000000_library', class: Migration20261203000000_library },
   { name: 'Migration20261204000000_production', class: Migration20261204000000_production },
+  {
+    name: 'Migration20261205000000_shot_list_indexes',
+    class: Migration20261205000000_shot_list_indexes,
+  },
 ];

@@ -25,8 +25,9 @@ import { ReviewState } from '../../takes/review-state';
  */
 @Entity({ tableName: 'shots' })
 @Unique({ properties: ['show', 'code'] })
-@Index({ properties: ['show', 'sequence'] })
-@Index({ properties: ['show', 'dueDate'] })
+// The list's usual orders (sequence then code; due date then code) read straight off these.
+@Index({ properties: ['show', 'sequence', 'code'] })
+@Index({ properties: ['show', 'dueDate', 'code'] })
 export class Shot {
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();

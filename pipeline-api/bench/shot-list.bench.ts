@@ -1,0 +1,108 @@
+// Shot list latency under 50 concurrent clients on loopback: the first page in the default sort,
+// and a filtered, sorted query (one assignee's late shots by due date). Two loads: saturated
+// (each client sends its next request as soon as the last answers, so latency is mostly queueing:
+// 50 clients ÷ requests per second) and paced (each client one request per second, people
+// paging through the table). Prints figures only.
+import autocannon from 'autocannon';
+import { fmt, latencyFigures } from './stats';
+
+/** Concurrent clients, as the product's target states. */
+const CONNECTIONS = 50;
+/** Requests per saturated run (bounded: under a minute each on two cores). */
+const REQUESTS = 3000;
+/** Requests per paced run: ten seconds at one request per client per second. */
+const PACED_REQUESTS = 500;
+const WARM_UP = 300;
+
+/** One measured query. */
+export interface ShotListCase {
+  name: string;
+  path: string;
+}
+
+/** What a run measured. */
+export interface ShotListFigures {
+  name: string;
+  load: 'saturated' | 'paced';
+  p50: number;
+  p95: number;
+  p99: number;
+  rps: number;
+  failures: number;
+}
+
+/**
+ * Each client has its own address (X-Forwarded-For, trusted from loopback), as 50 people at 50
+ * desks would: the API's per-address request limit is for one client, not for the whole studio.
+ */
+function run(
+  url: string,
+  cookie: string,
+  amount: number,
+  connectionRate?: number,
+): Promise<{ ms: number[]; rps: number; failures: number }> {
+  const ms: number[] = [];
+  let next = 0;
+  return new Promise((resolve, reject) => {
+    const instance = autocannon(
+      {
+        url,
+        connections: CONNECTIONS,
+        amount,
+        connectionRate,
+        timeout: 10,
+        headers: { cookie, accept: 'application/json' },
+        setupClient: (client) => {
+          next += 1;
+          client.setHeaders({
+            cookie,
+            accept: 'application/json',
+            'x-forwarded-for': `10.77.0.${next}`,
+          });
+        },
+      },
+      (err, result) => {
+        if (err) return reject(err);
+        const failures = result.errors + result.timeouts + result.non2xx;
+        resolve({ ms, rps: result.requests.total / result.duration, failures });
+      },
+    );
+    instance.on('response', (_client, _status, _bytes, time) => {
+      ms.push(time);
+    });
+  });
+}
+
+/** Measures each case after a short warm-up; returns and prints the figures. */
+export async function runShotListBench(
+  apiUrl: string,
+  cookie: string,
+  cases: ShotListCase[],
+): Promise<ShotListFigures[]> {
+  console.log(
+    `\nshot list: ${CONNECTIONS} concurrent clients; saturated ${REQUESTS} requests, paced ${PACED_REQUESTS} at 1/s per client`,
+  );
+  console.log(
+    '  query                            load         p50 ms  p95 ms  p99 ms    req/s  failed',
+  );
+  const out: ShotListFigures[] = [];
+  for (const c of cases) {
+    const url = `${apiUrl}${c.path}`;
+    const probe = await fetch(url, { headers: { cookie } });
+    if (probe.status !== 200)
+      throw new Error(`${c.path} answered ${probe.status}: ${await probe.text()}`);
+    await run(url, cookie, WARM_UP);
+    for (const load of ['saturated', 'paced'] as const) {
+      const { ms, rps, failures } =
+        load === 'saturated'
+          ? await run(url, cookie, REQUESTS)
+          : await run(url, cookie, PACED_REQUESTS, 1);
+      const f = { name: c.name, load, ...latencyFigures(ms), rps, failures };
+      out.push(f);
+      console.log(
+        `  ${c.name.padEnd(32)} ${load.padEnd(10)} ${fmt(f.p50)} ${fmt(f.p95)} ${fmt(f.p99)} ${fmt(f.rps, 0, 8)} ${String(failures).padStart(7)}`,
+      );
+    }
+  }
+  return out;
+}
