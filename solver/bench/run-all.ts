@@ -2,7 +2,11 @@
 import { cpus } from 'node:os';
 import { runCaptureBench } from './capture-io.bench.js';
 import { runPoseEstimateBench } from './pose-estimate.bench.js';
+// Retarget and live tuning.
+import { runRetargetBench } from './retarget.bench.js';
 import { runSkinningBench } from './skinning.bench.js';
+// Learn.
+import { runLearnBench } from './learn.bench.js';
 
 console.log(
   `solver benchmarks: Node ${process.version}, ${cpus().length} cores, ${cpus()[0]?.model}`,
@@ -10,3 +14,7 @@ console.log(
 await runSkinningBench();
 await runCaptureBench();
 await runPoseEstimateBench();
+// Retarget and live tuning.
+await runRetargetBench();
+// Learn.
+await runLearnBench();

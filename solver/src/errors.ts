@@ -15,7 +15,20 @@ export type SolverErrorCode =
   | 'BVH_CHANNEL_COUNT'
   | 'NO_FRAMES'
   | 'BAD_FPS'
-  | 'UNSUPPORTED_INPUT';
+  | 'UNSUPPORTED_INPUT'
+  // Learning and profiles.
+  | 'NO_MOTION'
+  | 'NOT_A_PROFILE'
+  | 'UNSUPPORTED_FORMAT_VERSION'
+  // Retarget and live tuning.
+  | 'PROFILE_MISMATCH'
+  | 'UNMAPPED_DRIVER'
+  | 'BAD_JOINT_MAP'
+  | 'CLIP_TOO_SHORT'
+  | 'BAD_CONTROL'
+  | 'UNKNOWN_REGION'
+  | 'BAD_FRAME_RANGE'
+  | 'NOT_A_TAKE';
 
 /** Where in the input the problem is; only the fields that apply are set. */
 export interface ErrorLocation {

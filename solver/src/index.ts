@@ -93,3 +93,144 @@ export { symmetricEigen } from './linalg/sym-eigen.js';
 export { createRigidFit, fitRigidTransform } from './linalg/rigid-fit.js';
 export type { RigidFit } from './linalg/rigid-fit.js';
 export type { NumArray } from './linalg/types.js';
+
+// ─── Retarget, take output and live tuning ───
+export type { LiveTuneData, ModalForm, Take, TakeMetrics } from './types.js';
+export {
+  jointNameKey,
+  mapJoints,
+  parseJointMap,
+  mapDrivers,
+  driverEnergyShares,
+  DRIVER_MAP_DEFAULTS,
+} from './rig/joint-map.js';
+export type {
+  DriverMapOptions,
+  DriverMapping,
+  JointMapEntry,
+  JointMapping,
+  JointMatch,
+} from './rig/joint-map.js';
+export { transferBasis, sameTopology } from './retarget/transfer.js';
+export type { TransferResult } from './retarget/transfer.js';
+export { jointBindPositions, lengthRatio, sizeFrequencyFactor } from './retarget/scaling.js';
+export { CONTROLS_DEFAULTS, resolveControls, poleMask, clampFactor } from './retarget/controls.js';
+export {
+  createPoleEditor,
+  editPoles,
+  rebuildDynamics,
+  modeProjection,
+  MAX_POLE_MAGNITUDE,
+} from './retarget/pole-edit.js';
+export type { PoleEditor } from './retarget/pole-edit.js';
+export { modalForm, poleFrequency, poleGroups } from './retarget/modal-form.js';
+export {
+  vertexGainField,
+  characterRegionNames,
+  REGION_GAIN_DEFAULTS,
+} from './retarget/region-gains.js';
+export type { RegionGainOptions } from './retarget/region-gains.js';
+export { clipFrameRange, holdFirstPose, simulationClip } from './retarget/shot-clip.js';
+export type { SimulationClip } from './retarget/shot-clip.js';
+export { retarget, RETARGET_DEFAULTS } from './retarget/retarget.js';
+export type { RetargetOptions, RetargetResult, RetargetStage } from './retarget/retarget.js';
+export { takeModes, takeMetrics } from './retarget/take-metrics.js';
+export { transferCorrectives } from './retarget/transfer-correctives.js';
+export { takeFramePositions } from './retarget/take-positions.js';
+export { resampleClipCubic } from './rig/resample-clip-cubic.js';
+export { createLiveTuner, largestDisplacement, clampIndex } from './live/live-tune.js';
+export type { LiveControls, LiveTuner } from './live/live-tune.js';
+export { rescaleRegionGains } from './live/region-rescale.js';
+export { luFactor, luSolve } from './linalg/lu-solve.js';
+export { writeTakeGlb } from './io/take-writer.js';
+export { readTakeGlb } from './io/take-reader.js';
+export type { TakeFile } from './io/take-reader.js';
+export {
+  takeExtras,
+  liveTuneDataFromExtras,
+  asTakeExtras,
+  TAKE_EXTRAS_VERSION,
+} from './io/take-extras.js';
+export type { TakeExtras } from './io/take-extras.js';
+export { packArray, unpackArray, encodeBase64, decodeBase64 } from './io/packed-arrays.js';
+export type { PackedArray, PackedType } from './io/packed-arrays.js';
+// ─── end retarget ───
+
+// ─── learn: tissue profiles ───
+export { learnProfile, LEARN_DEFAULTS } from './learn/learn.js';
+export type { LearnOptions, LearnResult, LearnStage } from './learn/learn.js';
+export { separatePoseDriven, SEPARATE_DEFAULTS, influencingJoints } from './learn/separate.js';
+export type { SeparateOptions, Separation } from './learn/separate.js';
+export { poseFeatures, applyCorrectives, FEATURES_PER_JOINT } from './learn/pose-features.js';
+export { selectDrivers, SELECT_DRIVERS_DEFAULTS } from './learn/select-drivers.js';
+export type { SelectDriversOptions } from './learn/select-drivers.js';
+export { dynamicSubspace, leadingSubspace } from './learn/dynamic-subspace.js';
+export type { DynamicSubspace, SubspaceMethod } from './learn/dynamic-subspace.js';
+export { regionSpectra, modesMatchPeaks } from './learn/region-spectra.js';
+export type { RegionSpectrum } from './learn/region-spectra.js';
+export { fitReport, nrmse } from './learn/fit-report.js';
+export { checkFinite, checkMoves, clipForCapture } from './learn/check-capture.js';
+export {
+  driverInputs,
+  restDriverInputs,
+  driverInputCount,
+  driverJointIndices,
+  ALL_DRIVER_SIGNALS,
+  GRAVITY,
+} from './dynamics/driver-inputs.js';
+export type { DriverInputs } from './dynamics/driver-inputs.js';
+export {
+  savitzkyGolay,
+  savitzkyGolayWeights,
+  SAVITZKY_GOLAY_DEFAULTS,
+} from './dynamics/savitzky-golay.js';
+export type { SavitzkyGolayOptions } from './dynamics/savitzky-golay.js';
+export { lowPassZeroPhase, butterworthSections, LOW_PASS_DEFAULTS } from './dynamics/low-pass.js';
+export type { LowPassOptions } from './dynamics/low-pass.js';
+export { fitArx, ARX_FIT_DEFAULTS } from './dynamics/arx-fit.js';
+export type { ArxFitOptions, ArxModel } from './dynamics/arx-fit.js';
+export { identifyDynamics, IDENTIFY_DEFAULTS } from './dynamics/identify.js';
+export type { Identification, IdentifyOptions } from './dynamics/identify.js';
+export { enforceStability, MAX_POLE_RADIUS } from './dynamics/stability.js';
+export type { StabilityResult } from './dynamics/stability.js';
+export {
+  companionEigen,
+  poleToModal,
+  modalToPole,
+  rebuildFromPoles,
+  spectralRadius,
+} from './dynamics/poles.js';
+export type { CompanionEigen } from './dynamics/poles.js';
+export { identifyModes, MODES_DEFAULTS } from './dynamics/modes.js';
+export type { ModesOptions } from './dynamics/modes.js';
+export {
+  freeRun,
+  oneStepPrediction,
+  scaleInputs,
+  simulateDynamics,
+  arxOfDynamics,
+} from './dynamics/simulate.js';
+export { welchPsd, spectrumPeaks, floorPowerOfTwo } from './dynamics/spectrum.js';
+export type { Spectrum, WelchOptions } from './dynamics/spectrum.js';
+export { gramBasis, basisFromGram } from './linalg/gram-basis.js';
+export { snapshotGram, multiplyTransposed, multiplyByRows } from './linalg/gram-kernel.js';
+export { randomizedSvd, RANDOMIZED_SVD_DEFAULTS } from './linalg/randomized-svd.js';
+export type { RandomizedSvdOptions } from './linalg/randomized-svd.js';
+export { topEigen, TOP_EIGEN_DEFAULTS } from './linalg/top-eigen.js';
+export type { TopEigen, TopEigenOptions } from './linalg/top-eigen.js';
+export { chooseRank, RANK_RULE_DEFAULTS } from './linalg/rank-rule.js';
+export type { RankChoice, RankRuleOptions } from './linalg/rank-rule.js';
+export { ridgeSolve, cholesky, choleskySolve, gramColumns, crossColumns } from './linalg/ridge.js';
+export { fixSigns } from './linalg/sign-fix.js';
+export { orthonormaliseRows, orthonormaliseColumns } from './linalg/orthonormalise.js';
+export { seededUniform, seededNormal } from './linalg/seeded-random.js';
+export { frobeniusSquared } from './linalg/subspace.js';
+export type { Subspace } from './linalg/subspace.js';
+export {
+  readProfile,
+  writeProfile,
+  profileId,
+  PROFILE_FORMAT_VERSION,
+} from './io/profile-format.js';
+export { sha256Hex } from './io/sha-256.js';
+// ─── end learn ───

@@ -243,3 +243,93 @@ export interface Controls {
   /** Largest displacement of any vertex in metres, or null for no clamp. */
   maxDisplacement: number | null;
 }
+
+// ─── Retarget: modal form, live-tuning data and take ───
+
+/**
+ * Second-order dynamics in modal form: the 2K eigenvalues z of the companion matrix
+ * [[A1, A2], [I, 0]] and their mode vectors v (the eigenvector's lower half, K entries), so that
+ * (z²I − zA1 − A2) v = 0. A complex pair is stored adjacently, positive imaginary part first.
+ */
+export interface ModalForm {
+  /** Basis size K. */
+  k: number;
+  /** Rate the poles are discrete at. */
+  fps: number;
+  /** Real and imaginary parts of each pole (2K). */
+  zRe: Float64Array;
+  zIm: Float64Array;
+  /** Real and imaginary parts of each mode vector, pole-major: pole i at [i·K, (i+1)·K). */
+  vRe: Float64Array;
+  vIm: Float64Array;
+  /** Index into the profile's modes for each pole (−1 when no mode describes it). */
+  modeOf: Int32Array;
+}
+
+/** Everything live tuning needs to re-simulate a take without the profile. */
+export interface LiveTuneData {
+  /** Basis size K. */
+  k: number;
+  /** Rate the dynamics run at (the profile's). */
+  simFps: number;
+  /** Simulated frames, pre-roll included. */
+  simFrames: number;
+  /** Drive e_t = B0 u_t + B1 u_{t−1} at the simulation rate (simFrames × K, frame-major). */
+  drive: Float32Array;
+  /** Dynamics after size scaling, before stiffness and damping. */
+  modal: ModalForm;
+  /** Shot frames (T). */
+  frameCount: number;
+  /** Shot rate. */
+  fps: number;
+  /** Per shot frame, the 4 simulation frames it interpolates (4T) and their weights (4T). */
+  sampleIndex: Int32Array;
+  sampleWeight: Float64Array;
+}
+
+/** Figures describing a take. */
+export interface TakeMetrics {
+  /** Length ratio λ = L_target / L_source. */
+  lengthRatio: number;
+  /** Factor applied to every natural frequency by size (1 when physical scaling is off). */
+  frequencyFactor: number;
+  /** Largest vertex displacement of the dynamic part over the shot, metres. */
+  peakDisplacement: number;
+  /** RMS of the dynamic displacement over vertices and frames, metres. */
+  rmsDisplacement: number;
+  /** Largest pole magnitude after the controls. */
+  maxPoleMagnitude: number;
+  /** Whether the topology was shared (identity transfer) or transferred by closest points. */
+  transfer: 'identity' | 'closest-point';
+}
+
+/** A retargeted shot: the target's dynamic basis, its coefficients and how to re-tune it. */
+export interface Take {
+  formatVersion: 1;
+  /** Profile the take came from. */
+  profileId: string;
+  profileName: string;
+  controls: Controls;
+  /** Shot rate and frames. */
+  fps: number;
+  frameCount: number;
+  /** Basis on the target's rest mesh with region gains baked: column k at [k·3N', (k+1)·3N'). */
+  basis: Float32Array;
+  /** Per-vertex gain baked into the basis (N'). */
+  vertexGains: Float32Array;
+  /** The profile's pose correctives carried onto the target (not stored in the take .glb). */
+  correctives: PoseCorrectives;
+  /** Dynamic coefficients c_t per shot frame (T × K), before gain. */
+  coefficients: Float32Array;
+  /** Morph weights per shot frame (T × K): coefficients × gain, displacement clamp applied. */
+  weights: Float32Array;
+  /** A1′, A2′ after the controls, at the simulation rate (K × K, row-major). */
+  a1: Float64Array;
+  a2: Float64Array;
+  /** Modes after size scaling and the controls, in the profile's order. */
+  modes: Mode[];
+  live: LiveTuneData;
+  metrics: TakeMetrics;
+  /** Non-fatal observations (unmapped drivers, modes near Nyquist, …). */
+  warnings: string[];
+}

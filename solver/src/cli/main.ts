@@ -4,17 +4,20 @@ import { readFile } from 'node:fs/promises';
 import { basename } from 'node:path';
 import { isSolverInputError } from '../errors.js';
 import { inspectFile } from '../io/inspect.js';
+import { retargetCommand } from './retarget-command.js';
+import { learnCommand } from './learn-command.js';
+import { modesCommand } from './modes-command.js';
 
 const USAGE = `usage: overshoot-solve <command> [options]
 
 commands:
   inspect FILE     what a .glb or .bvh file holds (JSON on stdout), or why it is invalid
-  learn            (not yet available)
-  retarget         (not yet available)
-  modes            (not yet available)
+  learn            character + capture → tissue profile (learn --help for options)
+  retarget         profile + character + clip → take .glb (retarget --help for options)
+  modes PROFILE    the profile's modes as a JSON array
 `;
 
-const LATER = new Set(['learn', 'retarget', 'modes']);
+const LATER = new Set<string>();
 
 /** Runs the CLI with `args` (without node and script); resolves to the exit code. */
 export async function main(args: string[]): Promise<number> {
@@ -23,6 +26,11 @@ export async function main(args: string[]): Promise<number> {
     (command ? process.stdout : process.stderr).write(USAGE);
     return command ? 0 : 2;
   }
+  // Retarget.
+  if (command === 'retarget') return retargetCommand(rest);
+  // Learn.
+  if (command === 'learn') return learnCommand(rest);
+  if (command === 'modes') return modesCommand(rest);
   if (LATER.has(command)) {
     process.stderr.write(`overshoot-solve: "${command}" is not yet available\n\n${USAGE}`);
     return 2;

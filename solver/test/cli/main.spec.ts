@@ -73,12 +73,12 @@ describe('overshoot-solve inspect', () => {
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
   });
 
-  it('exits 2 with usage for no arguments and "not yet available" for later commands', async () => {
+  it('exits 2 with usage for no arguments and for a learn without its required files', async () => {
     const none = await run([]);
     expect(none.code).toBe(2);
     expect(none.stderr).toContain('usage: overshoot-solve');
     const learn = await run(['learn', '--character', 'a.glb']);
     expect(learn.code).toBe(2);
-    expect(learn.stderr).toContain('not yet available');
+    expect(learn.stderr).toMatch(/^BAD_ARGUMENTS: --capture is required/);
   });
 });

@@ -1,0 +1,298 @@
+// Pose-driven part of the unposed residual: per vertex, a ridge regression of its rest-space
+// offset on the pose features (R − I) of the joints that skin it (local support keeps it sparse;
+// pose space deformation, Lewis, Cordner & Fong 2000); the joints are the skin joints and their
+// children, at most four. The regression is fitted to the residual
+// after a zero-phase low-pass, so oscillation above the cut-off stays in the dynamic part.
+// Vertices skinned by the same joints share one normal matrix, factored once per group; the ridge
+// strength (one for the whole mesh) minimises the error on held-out frames at the end of the
+// capture, then every frame is used for the final fit.
+import { lowPassZeroPhase } from '../dynamics/low-pass.js';
+import { cholesky, choleskySolve } from '../linalg/ridge.js';
+import { symmetricEigen } from '../linalg/sym-eigen.js';
+import type { Character, PoseCorrectives } from '../types.js';
+import { FEATURES_PER_JOINT } from './pose-features.js';
+
+/** Options for the pose-driven fit. */
+export interface SeparateOptions {
+  /** Low-pass cut-off (Hz) applied to the residual before the fit. */
+  cutoffHz?: number;
+  /** Butterworth order of each pass of the zero-phase low-pass. */
+  lowPassOrder?: number;
+  /** Share of frames (at the end) held out to choose the ridge strength. */
+  heldOutFraction?: number;
+  /** Ridge strengths tried, relative to the training frame count (features have unit RMS). */
+  ridgeGrid?: number[];
+  /**
+   * Per-joint signals (T × J × perJoint) fitted alongside the pose features but not kept in the
+   * correctives: they take the share of the low-passed residual that tissue dynamics explain
+   * (e.g. sag under the joint's specific force), so it does not leak into the correctives.
+   */
+  competing?: { values: Float64Array; perJoint: number } | null;
+  /** Choose the ridge strength per group of vertices with the same joints (else one for all). */
+  perGroupRidge?: boolean;
+}
+
+/** Defaults: 1.5 Hz keeps tissue oscillation (typically 2–8 Hz) out of the correctives. */
+export const SEPARATE_DEFAULTS: Required<SeparateOptions> = {
+  cutoffHz: 1.5,
+  lowPassOrder: 4,
+  heldOutFraction: 0.2,
+  ridgeGrid: [1e-8, 1e-7, 1e-6, 1e-5, 1e-4, 1e-3, 1e-2, 1e-1, 1, 10],
+  competing: null,
+  perGroupRidge: false,
+};
+
+/** The fitted pose-driven part. */
+export interface Separation {
+  correctives: PoseCorrectives;
+  /** Pose-driven offsets for every frame (T × 3N, rest space). */
+  poseDisplacement: Float32Array;
+  /** Held-out squared error for each ridge strength tried. */
+  ridgeErrors: number[];
+}
+
+interface Group {
+  joints: number[];
+  vertices: number[];
+}
+
+/**
+ * The ≤ 4 joints whose rotation can move vertex i: its skin joints and their children (a bone's
+ * flesh also bulges when the joint at its far end bends), ranked by skin weight, a child scoring
+ * half its parent's weight. Sorted by joint index.
+ */
+export function influencingJoints(character: Character, i: number, children: number[][]): number[] {
+  const score = new Map<number, number>();
+  const add = (j: number, s: number): void => {
+    score.set(j, Math.max(score.get(j) ?? 0, s));
+  };
+  for (let s = 0; s < 4; s++) {
+    const w = character.skinWeights[4 * i + s];
+    if (!(w > 0)) continue;
+    const j = character.skinJoints[4 * i + s];
+    add(j, w);
+    for (const c of children[j]) add(c, 0.5 * w);
+  }
+  return [...score]
+    .sort((a, b) => b[1] - a[1] || a[0] - b[0])
+    .slice(0, 4)
+    .map(([j]) => j)
+    .sort((a, b) => a - b);
+}
+
+/** Vertices grouped by their influencing joints. */
+function groupVertices(character: Character): Group[] {
+  const n = character.restPositions.length / 3;
+  const { parents } = character.skeleton;
+  const children: number[][] = Array.from({ length: parents.length }, () => []);
+  parents.forEach((p, j) => {
+    if (p >= 0) children[p].push(j);
+  });
+  const groups = new Map<string, Group>();
+  for (let i = 0; i < n; i++) {
+    const joints = influencingJoints(character, i, children);
+    const key = joints.join(',');
+    let g = groups.get(key);
+    if (!g) groups.set(key, (g = { joints, vertices: [] }));
+    g.vertices.push(i);
+  }
+  return [...groups.values()];
+}
+
+/**
+ * Fits the correctives to `residuals` (T × 3N; not modified) low-passed, with `features` from
+ * poseFeatures (T × J × 9).
+ */
+export function separatePoseDriven(
+  residuals: Float32Array,
+  frames: number,
+  character: Character,
+  features: Float64Array,
+  fps: number,
+  options: SeparateOptions = {},
+): Separation {
+  const opts = { ...SEPARATE_DEFAULTS, ...options };
+  const n = character.restPositions.length / 3;
+  const d = 3 * n;
+  const jc = character.skeleton.names.length;
+  const fw = jc * FEATURES_PER_JOINT;
+  const target = Float32Array.from(residuals);
+  lowPassZeroPhase(target, frames, d, opts.cutoffHz, fps, { order: opts.lowPassOrder });
+  // Unit-RMS features so one ridge strength treats small (θ²) and large (θ) entries alike.
+  const scale = new Float64Array(fw);
+  for (let t = 0; t < frames; t++)
+    for (let f = 0; f < fw; f++) scale[f] += features[t * fw + f] ** 2;
+  for (let f = 0; f < fw; f++) scale[f] = Math.sqrt(scale[f] / frames) || 1;
+  const extra = opts.competing;
+  const ew = extra ? jc * extra.perJoint : 0;
+  const epj = extra ? extra.perJoint : 0;
+  const escale = new Float64Array(ew);
+  if (extra) {
+    for (let t = 0; t < frames; t++)
+      for (let f = 0; f < ew; f++) escale[f] += extra.values[t * ew + f] ** 2;
+    for (let f = 0; f < ew; f++) escale[f] = Math.sqrt(escale[f] / frames) || 1;
+  }
+  const trainEnd = Math.max(
+    1,
+    Math.min(frames - 1, Math.round(frames * (1 - opts.heldOutFraction))),
+  );
+  const grid = opts.ridgeGrid.map((r) => r * trainEnd);
+  const groups = groupVertices(character);
+  const fpv = 4 * FEATURES_PER_JOINT;
+  const errors = new Float64Array(grid.length);
+  // Per group: scaled features, training and held-out normal matrices, per-vertex cross products.
+  const prepared = groups.map((g) => {
+    const pp = g.joints.length * FEATURES_PER_JOINT;
+    const p = pp + g.joints.length * epj;
+    const x = new Float64Array(frames * p);
+    for (let t = 0; t < frames; t++) {
+      g.joints.forEach((j, s) => {
+        for (let f = 0; f < FEATURES_PER_JOINT; f++) {
+          const src = j * FEATURES_PER_JOINT + f;
+          x[t * p + s * FEATURES_PER_JOINT + f] = features[t * fw + src] / scale[src];
+        }
+        for (let f = 0; f < epj; f++) {
+          const src = j * epj + f;
+          x[t * p + pp + s * epj + f] = extra!.values[t * ew + src] / escale[src];
+        }
+      });
+    }
+    const gt = new Float64Array(p * p);
+    const gv = new Float64Array(p * p);
+    for (let t = 0; t < frames; t++) {
+      const gm = t < trainEnd ? gt : gv;
+      for (let a = 0; a < p; a++) {
+        const xa = x[t * p + a];
+        if (xa !== 0) for (let b = 0; b < p; b++) gm[a * p + b] += xa * x[t * p + b];
+      }
+    }
+    const lambda = new Float64Array(p);
+    const q = new Float64Array(p * p);
+    symmetricEigen(Float64Array.from(gt), p, lambda, q);
+    // Held-out normal matrix in the training eigenbasis: Qᵀ Gv Q.
+    const gvq = rotate(gv, q, p);
+    const cross = new Float64Array(g.vertices.length * 2 * p * 3);
+    const groupErrors = new Float64Array(grid.length);
+    const y = new Float64Array(frames * 3);
+    const zt = new Float64Array(p * 3);
+    const zv = new Float64Array(p * 3);
+    g.vertices.forEach((i, vi) => {
+      for (let t = 0; t < frames; t++) {
+        y[3 * t] = target[t * d + 3 * i];
+        y[3 * t + 1] = target[t * d + 3 * i + 1];
+        y[3 * t + 2] = target[t * d + 3 * i + 2];
+      }
+      const ct = cross.subarray(vi * 6 * p, vi * 6 * p + 3 * p);
+      const cv = cross.subarray(vi * 6 * p + 3 * p, (vi + 1) * 6 * p);
+      let rvr = 0;
+      for (let t = 0; t < frames; t++) {
+        const c = t < trainEnd ? ct : cv;
+        const y0 = y[3 * t], y1 = y[3 * t + 1], y2 = y[3 * t + 2]; // prettier-ignore
+        if (t >= trainEnd) rvr += y0 * y0 + y1 * y1 + y2 * y2;
+        for (let a = 0; a < p; a++) {
+          const xa = x[t * p + a];
+          if (xa === 0) continue;
+          c[3 * a] += xa * y0;
+          c[3 * a + 1] += xa * y1;
+          c[3 * a + 2] += xa * y2;
+        }
+      }
+      // Into the eigenbasis: z = Qᵀ c.
+      for (let a = 0; a < p; a++) {
+        for (let ax = 0; ax < 3; ax++) {
+          let st = 0, sv = 0; // prettier-ignore
+          for (let b = 0; b < p; b++) {
+            st += q[b * p + a] * ct[3 * b + ax];
+            sv += q[b * p + a] * cv[3 * b + ax];
+          }
+          zt[3 * a + ax] = st;
+          zv[3 * a + ax] = sv;
+        }
+      }
+      grid.forEach((lam, li) => {
+        let err = rvr;
+        for (let ax = 0; ax < 3; ax++) {
+          for (let a = 0; a < p; a++) {
+            const ba = zt[3 * a + ax] / (lambda[a] + lam);
+            err -= 2 * ba * zv[3 * a + ax];
+            let s = 0;
+            for (let b = 0; b < p; b++) s += gvq[a * p + b] * (zt[3 * b + ax] / (lambda[b] + lam));
+            err += ba * s;
+          }
+        }
+        errors[li] += err;
+        groupErrors[li] += err;
+      });
+    });
+    return { g, p, pp, x, gram: gt.map((v, k) => v + gv[k]), cross, groupErrors };
+  });
+  let best = 0;
+  for (let li = 1; li < grid.length; li++) if (errors[li] < errors[best]) best = li;
+  const lam = grid[best];
+  const featureJoints = new Uint16Array(4 * n);
+  const coefficients = new Float32Array(n * 3 * fpv);
+  const poseDisplacement = new Float32Array(frames * d);
+  for (const { g, p, pp, x, gram, cross, groupErrors } of prepared) {
+    let gl = best;
+    if (opts.perGroupRidge)
+      for (let li = 0; li < grid.length; li++) if (groupErrors[li] < groupErrors[gl]) gl = li;
+    const a = Float64Array.from(gram);
+    for (let k = 0; k < p; k++) a[k * p + k] += grid[gl];
+    const ok = cholesky(a, p);
+    g.vertices.forEach((i, vi) => {
+      for (let s = 0; s < 4; s++)
+        featureJoints[4 * i + s] = g.joints[Math.min(s, g.joints.length - 1)];
+      if (!ok) return;
+      const rhs = new Float64Array(p * 3);
+      const base = vi * 6 * p;
+      for (let k = 0; k < 3 * p; k++) rhs[k] = cross[base + k] + cross[base + 3 * p + k];
+      choleskySolve(a, p, rhs, 3);
+      for (let t = 0; t < frames; t++) {
+        let px = 0, py = 0, pz = 0; // prettier-ignore
+        for (let k = 0; k < pp; k++) {
+          const xv = x[t * p + k];
+          px += xv * rhs[3 * k];
+          py += xv * rhs[3 * k + 1];
+          pz += xv * rhs[3 * k + 2];
+        }
+        poseDisplacement[t * d + 3 * i] = px;
+        poseDisplacement[t * d + 3 * i + 1] = py;
+        poseDisplacement[t * d + 3 * i + 2] = pz;
+      }
+      g.joints.forEach((j, s) => {
+        for (let f = 0; f < FEATURES_PER_JOINT; f++) {
+          const k = s * FEATURES_PER_JOINT + f;
+          const sc = scale[j * FEATURES_PER_JOINT + f];
+          for (let ax = 0; ax < 3; ax++)
+            coefficients[(3 * i + ax) * fpv + k] = rhs[3 * k + ax] / sc;
+        }
+      });
+    });
+  }
+  return {
+    correctives: { featuresPerVertex: fpv, featureJoints, coefficients, ridgeLambda: lam },
+    poseDisplacement,
+    ridgeErrors: Array.from(errors),
+  };
+}
+
+/** Qᵀ A Q for symmetric p×p A and orthogonal Q (row-major). */
+function rotate(a: Float64Array, q: Float64Array, p: number): Float64Array {
+  const aq = new Float64Array(p * p);
+  for (let i = 0; i < p; i++) {
+    for (let j = 0; j < p; j++) {
+      let s = 0;
+      for (let k = 0; k < p; k++) s += a[i * p + k] * q[k * p + j];
+      aq[i * p + j] = s;
+    }
+  }
+  const out = new Float64Array(p * p);
+  for (let i = 0; i < p; i++) {
+    for (let j = 0; j < p; j++) {
+      let s = 0;
+      for (let k = 0; k < p; k++) s += q[k * p + i] * aq[k * p + j];
+      out[i * p + j] = s;
+    }
+  }
+  return out;
+}
