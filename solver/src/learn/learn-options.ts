@@ -22,7 +22,7 @@ export interface LearnOptions {
   name?: string | null;
   /** Largest number of basis directions (K cap). */
   maxModes?: number;
-  /** Low-pass cut-off (Hz) of the pose-driven fit. */
+  /** Low-pass cut-off (Hz) of the pose-driven fit (default half the lowest expected mode). */
   cutoffHz?: number;
   /** Variance target of the rank rule, and its noise tests (see linalg/rank-rule.ts). */
   varianceTarget?: number;
@@ -32,6 +32,15 @@ export interface LearnOptions {
   heldOutFraction?: number;
   /** Refinement passes of the pose/dynamic separation (0: the plain low-pass fit). */
   refinementPasses?: number;
+  /**
+   * Fit the correctives jointly with every joint's specific force (minus its rest value), which
+   * carries the tissue's quasi-static response, and keep only the pose-feature part.
+   */
+  separationInputs?: boolean;
+  /** Derivatives of the specific force added to those signals (0–2). */
+  separationDerivatives?: number;
+  /** Keep the full-band corrective fit where it leaves under this share of the residual (0: off). */
+  fullBandUnexplained?: number;
   /** Savitzky–Golay half-width and degree of the driver-input derivatives. */
   derivativeHalfWidth?: number;
   derivativeDegree?: number;
@@ -55,12 +64,15 @@ export const LEARN_DEFAULTS: Required<LearnOptions> = {
   clip: null,
   name: null,
   maxModes: 32,
-  cutoffHz: 1.5,
+  cutoffHz: 0.8,
   varianceTarget: 0.95,
   noiseFactor: 4,
   minEnergyShare: 1e-4,
   heldOutFraction: 0.2,
   refinementPasses: 0,
+  separationInputs: true,
+  separationDerivatives: 2,
+  fullBandUnexplained: 0.05,
   derivativeHalfWidth: 1,
   derivativeDegree: 2,
   maxDrivers: 10,

@@ -1,11 +1,18 @@
 // Learn: character + capture → tissue profile. validate → poses → unpose → separate pose-driven
 // from dynamic → dynamic basis → drivers → ARX dynamics → modes → spectra → fit report.
-// The pose-driven fit on the low-passed residual also takes up the low-frequency part of the
-// tissue's own response (sag under gravity, slow sway), which is correlated with pose. So the
-// separation is refined: each pass identifies dynamics from the current dynamic residual, runs
-// them freely from the driver inputs, and refits the correctives to the residual minus that
-// input-driven motion. Measured on the synthetic demo capture (noise-free, 10 s): the pose-driven
-// part's relative error falls 0.74 → 0.51 → 0.42 → 0.37 over passes 0–3.
+// The pose-driven fit on the low-passed residual would also take up the low-frequency part of the
+// tissue's own response (sag under gravity, slow sway), which is correlated with pose. Three
+// measures keep it out (relative error of the pose-driven part on the synthetic demo capture,
+// noise-free, 10 s, 0.74 with none of them): (1) every joint's specific force and its first two
+// derivatives compete with the pose features in the fit and are then dropped, since they carry
+// the quasi-static tissue response; (2) the cut-off is 0.8 Hz, half the lowest expected tissue
+// mode (1.5 Hz), with the features filtered alike so the pose relation survives the filter;
+// (3) where the full-band pose fit leaves under 5 % of a vertex's residual there is no tissue
+// motion to protect, so the full-band fit is kept (a low-pass would blunt fast correctives).
+// Together: 0.10 (0.27 on the noisy 8 s capture, from 20). Optional refinement passes identify
+// dynamics from the current dynamic residual, run them freely from the driver inputs, and refit
+// the correctives to the residual minus that input-driven motion (off by default: with drivers
+// chosen automatically it can diverge).
 import { driverInputs } from '../dynamics/driver-inputs.js';
 import { identifyDynamics } from '../dynamics/identify.js';
 import { identifyModes } from '../dynamics/modes.js';
@@ -27,6 +34,8 @@ import { fitReport } from './fit-report.js';
 import { FEATURES_PER_JOINT, poseFeatures } from './pose-features.js';
 import { modesMatchPeaks, regionSpectra, type RegionSpectrum } from './region-spectra.js';
 import { separatePoseDriven, type Separation } from './separate.js';
+import { preferFullBand } from './full-band.js';
+import { separationSignals } from './separation-signals.js';
 import { selectDrivers } from './select-drivers.js';
 
 /** A learned profile with what was measured on the way. */
@@ -106,6 +115,9 @@ export function learnProfile(
   const trainEnd = Math.max(4, Math.round(T * (1 - opts.heldOutFraction)));
   const passes = opts.refinementPasses + 1;
   const sg = { halfWidth: opts.derivativeHalfWidth, degree: opts.derivativeDegree };
+  const competing = opts.separationInputs
+    ? separationSignals(character.skeleton, clip, opts.separationDerivatives, sg)
+    : null;
   let target = residuals;
   let sep: Separation | null = null;
   let drivers: Driver[] = [];
@@ -113,7 +125,10 @@ export function learnProfile(
   const dynamic = new Float32Array(T * d);
   for (let pass = 0; pass < passes; pass++) {
     const s = stage('separate', 1 / passes, () =>
-      separatePoseDriven(target, T, character, features, fps, { cutoffHz: opts.cutoffHz }),
+      separatePoseDriven(target, T, character, features, fps, {
+        cutoffHz: opts.cutoffHz,
+        competing,
+      }),
     );
     sep = s;
     for (let i = 0; i < dynamic.length; i++) dynamic[i] = residuals[i] - s.poseDisplacement[i];
@@ -166,7 +181,24 @@ export function learnProfile(
       target = next;
     });
   }
-  const separation = sep as Separation;
+  let separation = sep as Separation;
+  if (opts.fullBandUnexplained > 0) {
+    const full = stage('separate', 0, () =>
+      separatePoseDriven(residuals, T, character, features, fps, {
+        cutoffHz: fps,
+        competing: null,
+      }),
+    );
+    separation = preferFullBand(
+      separation,
+      full,
+      residuals,
+      T,
+      opts.fullBandUnexplained,
+    ).separation;
+    for (let i = 0; i < dynamic.length; i++)
+      dynamic[i] = residuals[i] - separation.poseDisplacement[i];
+  }
   // Corrective span: the dominant directions of the pose-driven displacement, keeping only those
   // along which the pose-driven part moves more than the dynamic residual does (a direction the
   // dynamics dominate is tissue motion the correctives took up, not a corrective shape).
@@ -227,6 +259,9 @@ export function learnProfile(
       minEnergyShare: opts.minEnergyShare,
       heldOutFraction: opts.heldOutFraction,
       refinementPasses: opts.refinementPasses,
+      separationInputs: opts.separationInputs,
+      separationDerivatives: opts.separationDerivatives,
+      fullBandUnexplained: opts.fullBandUnexplained,
       derivativeHalfWidth: opts.derivativeHalfWidth,
       derivativeDegree: opts.derivativeDegree,
       seed: opts.seed,

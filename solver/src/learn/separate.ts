@@ -1,8 +1,10 @@
 // Pose-driven part of the unposed residual: per vertex, a ridge regression of its rest-space
 // offset on the pose features (R − I) of the joints that skin it (local support keeps it sparse;
 // pose space deformation, Lewis, Cordner & Fong 2000); the joints are the skin joints and their
-// children, at most four. The regression is fitted to the residual
-// after a zero-phase low-pass, so oscillation above the cut-off stays in the dynamic part.
+// children, at most four. The regression is fitted to the residual and the features after the
+// same zero-phase low-pass, so oscillation above the cut-off stays in the dynamic part; optional
+// competing signals (tissue inputs) are fitted alongside and dropped, so that the slow tissue
+// response they explain does not leak into the correctives.
 // Vertices skinned by the same joints share one normal matrix, factored once per group; the ridge
 // strength (one for the whole mesh) minimises the error on held-out frames at the end of the
 // capture, then every frame is used for the final fit.
@@ -11,6 +13,9 @@ import { cholesky, choleskySolve } from '../linalg/ridge.js';
 import { symmetricEigen } from '../linalg/sym-eigen.js';
 import type { Character, PoseCorrectives } from '../types.js';
 import { FEATURES_PER_JOINT } from './pose-features.js';
+import { groupVertices } from './vertex-groups.js';
+
+export { influencingJoints } from './vertex-groups.js';
 
 /** Options for the pose-driven fit. */
 export interface SeparateOptions {
@@ -30,16 +35,23 @@ export interface SeparateOptions {
   competing?: { values: Float64Array; perJoint: number } | null;
   /** Choose the ridge strength per group of vertices with the same joints (else one for all). */
   perGroupRidge?: boolean;
+  /**
+   * Low-pass the regressors with the same filter as the residual. The pose-driven part is linear
+   * in the features, so filtering both sides keeps that relation exact whatever the cut-off;
+   * otherwise a cut-off below the pose's own rate (gait ~1 Hz) would blunt the correctives.
+   */
+  filterFeatures?: boolean;
 }
 
-/** Defaults: 1.5 Hz keeps tissue oscillation (typically 2–8 Hz) out of the correctives. */
+/** Defaults: 0.8 Hz keeps tissue oscillation (typically 1.5–8 Hz) out of the correctives. */
 export const SEPARATE_DEFAULTS: Required<SeparateOptions> = {
-  cutoffHz: 1.5,
+  cutoffHz: 0.8,
   lowPassOrder: 4,
   heldOutFraction: 0.2,
   ridgeGrid: [1e-8, 1e-7, 1e-6, 1e-5, 1e-4, 1e-3, 1e-2, 1e-1, 1, 10],
   competing: null,
   perGroupRidge: false,
+  filterFeatures: true,
 };
 
 /** The fitted pose-driven part. */
@@ -49,54 +61,6 @@ export interface Separation {
   poseDisplacement: Float32Array;
   /** Held-out squared error for each ridge strength tried. */
   ridgeErrors: number[];
-}
-
-interface Group {
-  joints: number[];
-  vertices: number[];
-}
-
-/**
- * The ≤ 4 joints whose rotation can move vertex i: its skin joints and their children (a bone's
- * flesh also bulges when the joint at its far end bends), ranked by skin weight, a child scoring
- * half its parent's weight. Sorted by joint index.
- */
-export function influencingJoints(character: Character, i: number, children: number[][]): number[] {
-  const score = new Map<number, number>();
-  const add = (j: number, s: number): void => {
-    score.set(j, Math.max(score.get(j) ?? 0, s));
-  };
-  for (let s = 0; s < 4; s++) {
-    const w = character.skinWeights[4 * i + s];
-    if (!(w > 0)) continue;
-    const j = character.skinJoints[4 * i + s];
-    add(j, w);
-    for (const c of children[j]) add(c, 0.5 * w);
-  }
-  return [...score]
-    .sort((a, b) => b[1] - a[1] || a[0] - b[0])
-    .slice(0, 4)
-    .map(([j]) => j)
-    .sort((a, b) => a - b);
-}
-
-/** Vertices grouped by their influencing joints. */
-function groupVertices(character: Character): Group[] {
-  const n = character.restPositions.length / 3;
-  const { parents } = character.skeleton;
-  const children: number[][] = Array.from({ length: parents.length }, () => []);
-  parents.forEach((p, j) => {
-    if (p >= 0) children[p].push(j);
-  });
-  const groups = new Map<string, Group>();
-  for (let i = 0; i < n; i++) {
-    const joints = influencingJoints(character, i, children);
-    const key = joints.join(',');
-    let g = groups.get(key);
-    if (!g) groups.set(key, (g = { joints, vertices: [] }));
-    g.vertices.push(i);
-  }
-  return [...groups.values()];
 }
 
 /**
@@ -117,19 +81,27 @@ export function separatePoseDriven(
   const jc = character.skeleton.names.length;
   const fw = jc * FEATURES_PER_JOINT;
   const target = Float32Array.from(residuals);
-  lowPassZeroPhase(target, frames, d, opts.cutoffHz, fps, { order: opts.lowPassOrder });
+  // A cut-off at or above the Nyquist frequency means no filter: the fit sees the full band.
+  const filter = opts.cutoffHz < fps / 2;
+  if (filter) lowPassZeroPhase(target, frames, d, opts.cutoffHz, fps, { order: opts.lowPassOrder });
   // Unit-RMS features so one ridge strength treats small (θ²) and large (θ) entries alike.
+  const fitFeatures = Float64Array.from(features.subarray(0, frames * fw));
+  if (filter && opts.filterFeatures)
+    lowPassZeroPhase(fitFeatures, frames, fw, opts.cutoffHz, fps, { order: opts.lowPassOrder });
   const scale = new Float64Array(fw);
   for (let t = 0; t < frames; t++)
-    for (let f = 0; f < fw; f++) scale[f] += features[t * fw + f] ** 2;
+    for (let f = 0; f < fw; f++) scale[f] += fitFeatures[t * fw + f] ** 2;
   for (let f = 0; f < fw; f++) scale[f] = Math.sqrt(scale[f] / frames) || 1;
   const extra = opts.competing;
   const ew = extra ? jc * extra.perJoint : 0;
   const epj = extra ? extra.perJoint : 0;
   const escale = new Float64Array(ew);
+  const extraValues = extra ? Float64Array.from(extra.values.subarray(0, frames * ew)) : null;
+  if (extraValues && filter && opts.filterFeatures)
+    lowPassZeroPhase(extraValues, frames, ew, opts.cutoffHz, fps, { order: opts.lowPassOrder });
   if (extra) {
     for (let t = 0; t < frames; t++)
-      for (let f = 0; f < ew; f++) escale[f] += extra.values[t * ew + f] ** 2;
+      for (let f = 0; f < ew; f++) escale[f] += extraValues![t * ew + f] ** 2;
     for (let f = 0; f < ew; f++) escale[f] = Math.sqrt(escale[f] / frames) || 1;
   }
   const trainEnd = Math.max(
@@ -143,17 +115,22 @@ export function separatePoseDriven(
   // Per group: scaled features, training and held-out normal matrices, per-vertex cross products.
   const prepared = groups.map((g) => {
     const pp = g.joints.length * FEATURES_PER_JOINT;
-    const p = pp + g.joints.length * epj;
+    const p = pp + (extra ? g.drivers.length * epj : 0);
+    // x: regressors as fitted (filtered); xo: the raw pose features that give the output.
     const x = new Float64Array(frames * p);
+    const xo = new Float64Array(frames * pp);
     for (let t = 0; t < frames; t++) {
       g.joints.forEach((j, s) => {
         for (let f = 0; f < FEATURES_PER_JOINT; f++) {
           const src = j * FEATURES_PER_JOINT + f;
-          x[t * p + s * FEATURES_PER_JOINT + f] = features[t * fw + src] / scale[src];
+          x[t * p + s * FEATURES_PER_JOINT + f] = fitFeatures[t * fw + src] / scale[src];
+          xo[t * pp + s * FEATURES_PER_JOINT + f] = features[t * fw + src] / scale[src];
         }
+      });
+      g.drivers.forEach((j, s) => {
         for (let f = 0; f < epj; f++) {
           const src = j * epj + f;
-          x[t * p + pp + s * epj + f] = extra!.values[t * ew + src] / escale[src];
+          x[t * p + pp + s * epj + f] = extraValues![t * ew + src] / escale[src];
         }
       });
     }
@@ -224,7 +201,7 @@ export function separatePoseDriven(
         groupErrors[li] += err;
       });
     });
-    return { g, p, pp, x, gram: gt.map((v, k) => v + gv[k]), cross, groupErrors };
+    return { g, p, pp, xo, gram: gt.map((v, k) => v + gv[k]), cross, groupErrors };
   });
   let best = 0;
   for (let li = 1; li < grid.length; li++) if (errors[li] < errors[best]) best = li;
@@ -232,7 +209,7 @@ export function separatePoseDriven(
   const featureJoints = new Uint16Array(4 * n);
   const coefficients = new Float32Array(n * 3 * fpv);
   const poseDisplacement = new Float32Array(frames * d);
-  for (const { g, p, pp, x, gram, cross, groupErrors } of prepared) {
+  for (const { g, p, pp, xo, gram, cross, groupErrors } of prepared) {
     let gl = best;
     if (opts.perGroupRidge)
       for (let li = 0; li < grid.length; li++) if (groupErrors[li] < groupErrors[gl]) gl = li;
@@ -250,7 +227,7 @@ export function separatePoseDriven(
       for (let t = 0; t < frames; t++) {
         let px = 0, py = 0, pz = 0; // prettier-ignore
         for (let k = 0; k < pp; k++) {
-          const xv = x[t * p + k];
+          const xv = xo[t * pp + k];
           px += xv * rhs[3 * k];
           py += xv * rhs[3 * k + 1];
           pz += xv * rhs[3 * k + 2];
