@@ -123,7 +123,7 @@ export {
   MAX_POLE_MAGNITUDE,
 } from './retarget/pole-edit.js';
 export type { PoleEditor } from './retarget/pole-edit.js';
-export { modalForm, poleFrequency, poleGroups } from './retarget/modal-form.js';
+export { modalForm, poleGroups } from './retarget/modal-form.js';
 export {
   vertexGainField,
   characterRegionNames,

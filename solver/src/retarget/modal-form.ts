@@ -1,21 +1,8 @@
 // Modal form of ARX dynamics: eigen-decomposition of the companion matrix (once per bake; live
 // tuning only edits the poles it yields), and the natural frequency and damping of each pole.
-import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { SolverInputError } from '../errors.js';
 import type { LinearDynamics, ModalForm, Mode } from '../types.js';
-
-/** Natural frequency (Hz) and damping ratio of a discrete pole z at `fps`: s = ln z · fps. */
-export function poleFrequency(
-  re: number,
-  im: number,
-  fps: number,
-): { frequencyHz: number; dampingRatio: number } {
-  const sRe = Math.log(Math.hypot(re, im)) * fps;
-  const sIm = (im === 0 && re < 0 ? Math.PI : Math.abs(Math.atan2(im, re))) * fps;
-  const mag = Math.hypot(sRe, sIm);
-  if (mag === 0) return { frequencyHz: 0, dampingRatio: 0 };
-  return { frequencyHz: mag / (2 * Math.PI), dampingRatio: im === 0 && re > 0 ? 1 : -sRe / mag };
-}
+import { companionEigen, poleToModal } from '../dynamics/poles.js';
 
 /** Index of the first pole of each mode: a complex pair counts once, each real pole once. */
 export function poleGroups(zIm: Float64Array): number[] {
@@ -34,18 +21,10 @@ export function poleGroups(zIm: Float64Array): number[] {
 export function modalForm(dynamics: LinearDynamics, fps: number, modes: Mode[]): ModalForm {
   const { k, a1, a2 } = dynamics;
   const n = 2 * k;
-  const f = Matrix.zeros(n, n);
-  for (let r = 0; r < k; r++) {
-    for (let c = 0; c < k; c++) {
-      f.set(r, c, a1[r * k + c]);
-      f.set(r, k + c, a2[r * k + c]);
-    }
-    f.set(k + r, r, 1);
-  }
-  const eig = new EigenvalueDecomposition(f, { assumeSymmetric: false });
-  const re = eig.realEigenvalues;
-  const im = eig.imaginaryEigenvalues;
-  const v = eig.eigenvectorMatrix;
+  const eig = companionEigen(a1, a2, k);
+  const re = eig.zRe;
+  const im = eig.zIm;
+  const v = { get: (r: number, c: number) => eig.vectors[r * n + c] };
   const zRe = new Float64Array(n);
   const zIm = new Float64Array(n);
   const vRe = new Float64Array(n * k);
@@ -85,7 +64,7 @@ function matchModes(zRe: Float64Array, zIm: Float64Array, fps: number, modes: Mo
   const groups = poleGroups(zIm);
   const pairs: { g: number; m: number; d: number }[] = [];
   for (const g of groups) {
-    const p = poleFrequency(zRe[g], zIm[g], fps);
+    const p = poleToModal(zRe[g], zIm[g], fps);
     modes.forEach((mode, m) => {
       const df = Math.abs(
         Math.log(Math.max(p.frequencyHz, 1e-9) / Math.max(mode.frequencyHz, 1e-9)),

@@ -1,6 +1,7 @@
 // Figures of a take: its modes after the controls, and the size of its dynamic displacement.
 import type { Mode, ModeFlag, TakeMetrics } from '../types.js';
-import { poleFrequency, poleGroups } from './modal-form.js';
+import { poleGroups } from './modal-form.js';
+import { poleToModal } from '../dynamics/poles.js';
 
 /** Fraction of the Nyquist frequency from which a mode is flagged (our choice). */
 export const NEAR_NYQUIST_FRACTION = 0.8;
@@ -21,7 +22,7 @@ export function takeModes(
   const matched: (Mode | null)[] = profileModes.map(() => null);
   const extra: Mode[] = [];
   for (const g of poleGroups(zIm)) {
-    const { frequencyHz, dampingRatio } = poleFrequency(zRe[g], zIm[g], simFps);
+    const { frequencyHz, dampingRatio } = poleToModal(zRe[g], zIm[g], simFps);
     const flags: ModeFlag[] = [];
     if (zIm[g] === 0 && zRe[g] < 0) flags.push('real-negative-pole');
     if (zIm[g] === 0 && zRe[g] >= 0) flags.push('overdamped');

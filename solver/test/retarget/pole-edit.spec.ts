@@ -7,7 +7,7 @@ import {
   createPoleEditor,
   editPoles,
   modalForm,
-  poleFrequency,
+  poleToModal,
   rebuildDynamics,
   resolveControls,
   type LinearDynamics,
@@ -65,7 +65,7 @@ function companionModes(a1: Float64Array, a2: Float64Array, k: number, fps: numb
   for (let i = 0; i < 2 * k; i++) {
     mags.push(Math.hypot(e.realEigenvalues[i], e.imaginaryEigenvalues[i]));
     if (e.imaginaryEigenvalues[i] > 0)
-      out.push(poleFrequency(e.realEigenvalues[i], e.imaginaryEigenvalues[i], fps));
+      out.push(poleToModal(e.realEigenvalues[i], e.imaginaryEigenvalues[i], fps));
   }
   return {
     modes: out.sort((a, b) => a.frequencyHz - b.frequencyHz),
