@@ -1,14 +1,6 @@
 // Skinning checked against three.js SkinnedMesh.applyBoneTransform (three 0.187.0), a widely
 // used reference implementation of linear blend skinning.
-import {
-  Bone,
-  BufferAttribute,
-  BufferGeometry,
-  Matrix4,
-  Skeleton as ThreeSkeleton,
-  SkinnedMesh,
-  Vector3,
-} from 'three';
+import { Vector3 } from 'three';
 import { describe, expect, it } from 'vitest';
 import {
   createPose,
@@ -17,36 +9,15 @@ import {
   skinPositions,
   skinningMatrices,
   worldMatrices,
-  type Character,
 } from '../../src/index.js';
 import { randomQuat, seededRandom } from '../helpers/random.js';
 import { syntheticCharacter } from '../helpers/synthetic-character.js';
-
-/** A three.js skinned mesh with the same skeleton, bind matrices and skin as `c`. */
-function threeMesh(c: Character): { mesh: SkinnedMesh; bones: Bone[] } {
-  const s = c.skeleton;
-  const bones = s.names.map((name) => Object.assign(new Bone(), { name }));
-  bones.forEach((b, j) => {
-    b.position.fromArray(s.restTranslations, 3 * j);
-    b.quaternion.fromArray(s.restRotations, 4 * j);
-    b.scale.fromArray(s.restScales, 3 * j);
-    if (s.parents[j] >= 0) bones[s.parents[j]].add(b);
-  });
-  const inverses = s.names.map((_, j) => new Matrix4().fromArray(s.inverseBindMatrices, 16 * j));
-  const geometry = new BufferGeometry();
-  geometry.setAttribute('position', new BufferAttribute(c.restPositions, 3));
-  geometry.setAttribute('skinIndex', new BufferAttribute(c.skinJoints, 4));
-  geometry.setAttribute('skinWeight', new BufferAttribute(c.skinWeights, 4));
-  const mesh = new SkinnedMesh(geometry);
-  mesh.add(bones[0]);
-  mesh.bind(new ThreeSkeleton(bones, inverses), new Matrix4());
-  return { mesh, bones };
-}
+import { threeSkinnedMesh } from '../helpers/three-skinned-mesh.js';
 
 describe('skinPositions', () => {
   it('equals three.js applyBoneTransform on random poses (relative error ≤ 1e-5)', () => {
     const character = syntheticCharacter({ restAngle: 0.4, scaledJoint: true });
-    const { mesh, bones } = threeMesh(character);
+    const { mesh, bones } = threeSkinnedMesh(character);
     const s = character.skeleton;
     const rand = seededRandom(5);
     const n = character.restPositions.length / 3;
