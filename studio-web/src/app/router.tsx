@@ -7,6 +7,11 @@ import { AppLoading } from '@/components/layouts/app-loading';
 import { paths } from '@/config/paths';
 import { NotFoundRoute } from './routes/not-found';
 import { statusLoader, StatusRoute } from './routes/status';
+import { adminRoutes } from '@/features/admin/routes';
+import { libraryRoutes } from '@/features/library/routes';
+import { shotsRoutes } from '@/features/shots/routes';
+import { takesRoutes } from '@/features/takes/routes';
+import { trackingRoutes } from '@/features/tracking/routes';
 
 /** The studio's route table; loaders get the app's query client to fill its cache. */
 export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
@@ -27,6 +32,11 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
               loader: statusLoader(queryClient),
               element: <StatusRoute />,
             },
+            ...libraryRoutes(queryClient),
+            ...shotsRoutes(queryClient),
+            ...takesRoutes(queryClient),
+            ...trackingRoutes(queryClient),
+            ...adminRoutes(queryClient),
             { path: paths.notFound.path, element: <NotFoundRoute /> },
           ],
         },
