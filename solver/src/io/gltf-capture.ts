@@ -200,13 +200,20 @@ function frameSchedule(
   }
   const intervals: number[] = [];
   for (let k = 0; k < times.length; k++) {
-    if (!Number.isFinite(times[k]) || (k > 0 && !(times[k] > times[k - 1]))) {
+    if (!Number.isFinite(times[k])) {
       throw new SolverInputError(
         'NON_FINITE_VALUE',
-        `weights key times not finite and increasing at key ${k}`,
+        `weights key time ${k} is not a finite number`,
         {
           frame: k,
         },
+      );
+    }
+    if (k > 0 && !(times[k] > times[k - 1])) {
+      throw new SolverInputError(
+        'KEY_TIMES_NOT_INCREASING',
+        `weights key ${k} is at ${times[k]} s, not after key ${k - 1} at ${times[k - 1]} s; re-export the capture with one key per frame in time order`,
+        { frame: k },
       );
     }
     if (k > 0) intervals.push(times[k] - times[k - 1]);

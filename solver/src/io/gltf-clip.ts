@@ -193,10 +193,17 @@ function samplerData(ch: AnimationChannel, path: string, nodeName: string): Samp
   const times = accessorFloats(input);
   const values = accessorFloats(output);
   for (let k = 0; k < times.length; k++) {
-    if (!Number.isFinite(times[k]) || (k > 0 && !(times[k] > times[k - 1]))) {
+    if (!Number.isFinite(times[k])) {
       throw new SolverInputError(
         'NON_FINITE_VALUE',
-        `key times of the ${path} channel of "${nodeName}" are not finite and increasing at key ${k}`,
+        `key time ${k} of the ${path} channel of "${nodeName}" is not a finite number`,
+        { ...where, frame: k },
+      );
+    }
+    if (k > 0 && !(times[k] > times[k - 1])) {
+      throw new SolverInputError(
+        'KEY_TIMES_NOT_INCREASING',
+        `key ${k} of the ${path} channel of "${nodeName}" is at ${times[k]} s, not after key ${k - 1} at ${times[k - 1]} s; re-export the clip with strictly increasing key times`,
         { ...where, frame: k },
       );
     }
