@@ -2,12 +2,30 @@
 import { stackConfig } from './stack/config.js';
 import { Stack } from './stack/stack.js';
 import { buildStale, generateSamples } from './stack/build.js';
-import { runSetup, startApiAndWorker } from './stack/api-processes.js';
+import { runSetup, startApiAndWorker, type DemoReport } from './stack/api-processes.js';
 import { alive } from './stack/processes.js';
 
 const cfg = stackConfig('dev');
 const stack = new Stack(cfg);
 const log = (m: string) => console.log(`[start] ${m}`);
+
+/** The sign-in lines of the closing message: the demo's people, else the first admin. */
+function signInLines(demo: DemoReport | null): string[] {
+  if (!demo || demo.signIns.length === 0) {
+    return [
+      `  Admin e-mail  ${cfg.admin.email} (its password was printed when it was created)`,
+      ...(demo?.note ? [`  Demo show     not loaded: ${demo.note}`] : []),
+    ];
+  }
+  const width = Math.max(...demo.signIns.map((s) => s.email.length));
+  return [
+    '',
+    `Demo sign-ins (${demo.passwordNotice ?? 'demo-only passwords'}):`,
+    ...demo.signIns.map(
+      (s) => `  ${s.role.padEnd(17)} ${s.email.padEnd(width)}  ${s.password}  (demo only)`,
+    ),
+  ];
+}
 
 let stopping = false;
 async function shutdown(code: number): Promise<never> {
@@ -25,7 +43,7 @@ try {
   await stack.up();
   buildStale(log);
   generateSamples(log);
-  runSetup(cfg);
+  const demo = runSetup(cfg, { demo: true });
   const { url } = await startApiAndWorker(stack);
   console.log(
     [
@@ -35,7 +53,7 @@ try {
       `  Service state ${url}/status`,
       `  Mail sink     http://${cfg.smtp.host}:${cfg.smtp.inboxPort}/messages`,
       `  Data          ${cfg.dataDir}`,
-      `  Admin e-mail  ${cfg.admin.email} (its password was printed when it was created)`,
+      ...signInLines(demo),
       '',
       'Press Ctrl-C to stop everything this command started.',
       '',

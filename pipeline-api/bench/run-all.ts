@@ -7,6 +7,7 @@ import { connectTestStack } from './bench-stack';
 import { seedShow } from './seed-show';
 import { runShotListBench } from './shot-list.bench';
 import { runUploadBench } from './upload.bench';
+import { pidListeningOn } from './server-cpu';
 
 const SHOTS = 1000;
 
@@ -39,13 +40,22 @@ async function main(): Promise<void> {
     const cookie = await signIn(stack.apiUrl, seeded.email, seeded.password);
     const base = `/api/shows/${seeded.showId}/shots`;
     const onlyShots = process.argv.includes('--shots-only');
-    await runShotListBench(stack.apiUrl, cookie, [
-      { name: 'first page, default sort', path: base },
-      {
-        name: 'one assignee, late, by due date',
-        path: `${base}?assigneeId=${seeded.assigneeIds[2]}&late=true&sort=dueDate:asc,code:asc`,
-      },
-    ]);
+    const pids = {
+      api: pidListeningOn(Number(stack.env.API_PORT)),
+      db: pidListeningOn(Number(stack.env.DB_PORT)),
+    };
+    await runShotListBench(
+      stack.apiUrl,
+      cookie,
+      [
+        { name: 'first page, default sort', path: base },
+        {
+          name: 'one assignee, late, by due date',
+          path: `${base}?assigneeId=${seeded.assigneeIds[2]}&late=true&sort=dueDate:asc,code:asc`,
+        },
+      ],
+      pids,
+    );
     if (!onlyShots) await runUploadBench(stack.apiUrl, cookie, seeded.showId, seeded.characterId);
   } finally {
     await stack.orm.close();

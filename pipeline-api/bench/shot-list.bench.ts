@@ -2,9 +2,13 @@
 // and a filtered, sorted query (one assignee's late shots by due date). Two loads: saturated
 // (each client sends its next request as soon as the last answers, so latency is mostly queueing:
 // 50 clients ÷ requests per second) and paced (each client one request per second, people
-// paging through the table). Prints figures only.
+// paging through the table). Beside latency, the CPU milliseconds the API and the database spend
+// per request (from /proc), and the machine's load average: on a shared machine latency measures
+// the other tenants too, CPU per request only our code. Prints figures only.
+import { loadavg } from 'node:os';
 import autocannon from 'autocannon';
 import { fmt, latencyFigures } from './stats';
+import { cpuMeter } from './server-cpu';
 
 /** Concurrent clients, as the product's target states. */
 const CONNECTIONS = 50;
@@ -29,6 +33,17 @@ export interface ShotListFigures {
   p99: number;
   rps: number;
   failures: number;
+  /** CPU milliseconds per request of the API process(es) and of the database (null: unknown). */
+  apiCpuMs: number | null;
+  dbCpuMs: number | null;
+  /** One-minute load average of the machine at the end of the run. */
+  load1: number;
+}
+
+/** Pids of the servers whose CPU to count (null: not found). */
+export interface ServerPids {
+  api: number | null;
+  db: number | null;
 }
 
 /**
@@ -78,12 +93,13 @@ export async function runShotListBench(
   apiUrl: string,
   cookie: string,
   cases: ShotListCase[],
+  pids: ServerPids,
 ): Promise<ShotListFigures[]> {
   console.log(
     `\nshot list: ${CONNECTIONS} concurrent clients; saturated ${REQUESTS} requests, paced ${PACED_REQUESTS} at 1/s per client`,
   );
   console.log(
-    '  query                            load         p50 ms  p95 ms  p99 ms    req/s  failed',
+    '  query                            load         p50 ms  p95 ms  p99 ms    req/s  failed  API ms/req  DB ms/req  loadavg',
   );
   const out: ShotListFigures[] = [];
   for (const c of cases) {
@@ -93,14 +109,28 @@ export async function runShotListBench(
       throw new Error(`${c.path} answered ${probe.status}: ${await probe.text()}`);
     await run(url, cookie, WARM_UP);
     for (const load of ['saturated', 'paced'] as const) {
+      const meter = cpuMeter({ api: pids.api, db: pids.db });
       const { ms, rps, failures } =
         load === 'saturated'
           ? await run(url, cookie, REQUESTS)
           : await run(url, cookie, PACED_REQUESTS, 1);
-      const f = { name: c.name, load, ...latencyFigures(ms), rps, failures };
+      const cpu = meter.since();
+      const perRequest = (v: number | null) => (v === null ? null : v / ms.length);
+      const f: ShotListFigures = {
+        name: c.name,
+        load,
+        ...latencyFigures(ms),
+        rps,
+        failures,
+        apiCpuMs: perRequest(cpu.api),
+        dbCpuMs: perRequest(cpu.db),
+        load1: loadavg()[0],
+      };
       out.push(f);
+      const cpuText = (v: number | null, w: number) =>
+        v === null ? 'n/a'.padStart(w) : fmt(v, 2, w);
       console.log(
-        `  ${c.name.padEnd(32)} ${load.padEnd(10)} ${fmt(f.p50)} ${fmt(f.p95)} ${fmt(f.p99)} ${fmt(f.rps, 0, 8)} ${String(failures).padStart(7)}`,
+        `  ${c.name.padEnd(32)} ${load.padEnd(10)} ${fmt(f.p50)} ${fmt(f.p95)} ${fmt(f.p99)} ${fmt(f.rps, 0, 8)} ${String(failures).padStart(7)} ${cpuText(f.apiCpuMs, 11)} ${cpuText(f.dbCpuMs, 10)} ${fmt(f.load1, 1, 8)}`,
       );
     }
   }

@@ -21,6 +21,7 @@ import { ShotsModule } from './shots/shots.module';
 import { TakesModule } from './takes/takes.module';
 import { ReviewsModule } from './reviews/reviews.module';
 import { EventsModule } from './events/events.module';
+import { JobsModule } from './jobs/jobs.module';
 
 /** The HTTP API. Long work is queued for the worker process, never run here. */
 @Module({
@@ -45,6 +46,7 @@ import { EventsModule } from './events/events.module';
     TakesModule,
     ReviewsModule,
     EventsModule,
+    JobsModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: ThrottlerGuard },

@@ -7,6 +7,8 @@ import { MailModule } from './mail/mail.module';
 import { DiagnosticsWorkerModule } from './diagnostics/diagnostics-worker.module';
 import { MailWorkerModule } from './mail/mail-worker.module';
 import { IngestWorkerModule } from './assets/ingest-worker.module';
+import { AuditModule } from './audit/audit.module';
+import { JobsWorkerModule } from './jobs/jobs-worker.module';
 
 /** The worker process: queue processors only, no HTTP. */
 @Module({
@@ -19,6 +21,8 @@ import { IngestWorkerModule } from './assets/ingest-worker.module';
     DiagnosticsWorkerModule,
     MailWorkerModule,
     IngestWorkerModule,
+    AuditModule,
+    JobsWorkerModule,
   ],
 })
 export class WorkerModule {}

@@ -151,14 +151,14 @@ describe('captures: consent records, deletion, and the consent check before lear
     await expect(
       service.assertUsableForLearning(em, show.id, capture.id, dayFromNow(11)),
     ).rejects.toMatchObject({
-      code: 'CAPTURE_CONSENT_EXPIRED',
+      code: 'CONSENT_EXPIRED',
     });
     // The same without a date: the record itself now says the consent ended yesterday.
     await world.em().nativeUpdate(Capture, capture.id, { consentExpiresOn: dayFromNow(-1) });
     await expect(
       service.assertUsableForLearning(world.em(), show.id, capture.id),
     ).rejects.toMatchObject({
-      code: 'CAPTURE_CONSENT_EXPIRED',
+      code: 'CONSENT_EXPIRED',
     });
     const view = await request(world.server)
       .get(`/api/shows/${show.id}/captures/${capture.id}`)

@@ -94,7 +94,8 @@ describe('RBAC matrix: every route × every kind of caller', () => {
     route.replace(/:(\w+)/g, (_, name: string) => {
       if (name === 'showId') return show.id;
       const ids = ['userId', 'tokenId', 'id', 'assetId', 'characterId', 'captureId', 'clipId'];
-      if ([...ids, 'profileId', 'shotId', 'takeId', 'noteId'].includes(name)) return otherId;
+      if ([...ids, 'profileId', 'shotId', 'takeId', 'noteId', 'jobId'].includes(name))
+        return otherId;
       throw new Error(`no placeholder for :${name}; add one in rbac-matrix.e2e-spec.ts`);
     });
 

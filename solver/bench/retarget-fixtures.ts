@@ -78,6 +78,20 @@ export function benchProfile(source: Character, k: number, fps: number): TissueP
       basis[c * n3 + 3 * i + 2] = (bump * z) / r;
     }
   }
+  // Correctives: an outward bulge of each vertex with entry (1,1) of R − I of each skin joint,
+  // so the take writer has corrective morph targets to make.
+  const fpv = 36;
+  const coefficients = new Float32Array((n3 / 3) * 3 * fpv);
+  for (let i = 0; i < n3 / 3; i++) {
+    const x = source.restPositions[3 * i], z = source.restPositions[3 * i + 2]; // prettier-ignore
+    const r = Math.hypot(x, z) || 1;
+    for (let s = 0; s < 4; s++) {
+      const w = source.skinWeights[4 * i + s];
+      if (!(w > 0)) continue;
+      coefficients[3 * i * fpv + 9 * s + 4] = (-0.03 * w * x) / r;
+      coefficients[(3 * i + 2) * fpv + 9 * s + 4] = (-0.03 * w * z) / r;
+    }
+  }
   const a1 = new Float64Array(k * k);
   const a2 = new Float64Array(k * k);
   const b0 = new Float64Array(k * m);
@@ -110,9 +124,9 @@ export function benchProfile(source: Character, k: number, fps: number): TissueP
     basis,
     singularValues: new Float64Array(k).fill(1),
     correctives: {
-      featuresPerVertex: 36,
+      featuresPerVertex: fpv,
       featureJoints: source.skinJoints,
-      coefficients: new Float32Array(0),
+      coefficients,
       ridgeLambda: 0,
     },
     dynamics: {

@@ -7,6 +7,7 @@ import { runRetargetBench } from './retarget.bench.js';
 import { runSkinningBench } from './skinning.bench.js';
 // Learn.
 import { runLearnBench } from './learn.bench.js';
+import { runProductKernelBench } from './product-kernels.bench.js';
 
 console.log(
   `solver benchmarks: Node ${process.version}, ${cpus().length} cores, ${cpus()[0]?.model}`,
@@ -17,4 +18,5 @@ await runPoseEstimateBench();
 // Retarget and live tuning.
 await runRetargetBench();
 // Learn.
+await runProductKernelBench();
 await runLearnBench();

@@ -77,6 +77,18 @@ export class Env {
   @IsOptional() @IsString() @MinLength(12) ADMIN_PASSWORD?: string;
 
   @Type(() => Number) @IsInt() @Min(1) @Max(64) WORKER_CONCURRENCY = 2;
+  /** Learn and retarget jobs each worker process runs at once per queue (one thread each). */
+  @Type(() => Number) @IsInt() @Min(1) @Max(64) SOLVE_CONCURRENCY = 1;
+  /** Tries per learn or retarget job for transient faults (bad input is never retried). */
+  @Type(() => Number) @IsInt() @Min(1) @Max(20) SOLVE_MAX_ATTEMPTS = 3;
+  /** First retry delay of a solve; each next one doubles. */
+  @Type(() => Number) @IsInt() @Min(100) @Max(600_000) SOLVE_BACKOFF_MS = 5000;
+  /** A solve whose worker stops renewing its lock this long is stalled and runs again. */
+  @Type(() => Number) @IsInt() @Min(1000) @Max(600_000) SOLVE_LOCK_MS = 30_000;
+  /** How often a worker looks for stalled solves. */
+  @Type(() => Number) @IsInt() @Min(500) @Max(600_000) SOLVE_STALLED_CHECK_MS = 30_000;
+  /** On shutdown, how long a running solve may finish before it is handed back to the queue. */
+  @Type(() => Number) @IsInt() @Min(0) @Max(3600) SOLVE_SHUTDOWN_GRACE_SECONDS = 20;
 
   /** Largest file per asset kind, in bytes (a declared size above it is refused at once). */
   @Type(() => Number) @IsInt() @Min(1) UPLOAD_MAX_CHARACTER_BYTES = 200 * MB;

@@ -17,6 +17,7 @@ import { Clip } from '../library/entities/clip.entity';
 import { TissueProfile } from '../library/entities/tissue-profile.entity';
 import { Shot } from '../shots/entities/shot.entity';
 import { RetargetJob } from '../jobs/entities/retarget-job.entity';
+import { LearnJob } from '../jobs/entities/learn-job.entity';
 import { Take } from '../takes/entities/take.entity';
 import { Note } from '../reviews/entities/note.entity';
 import { ReviewDecision } from '../reviews/entities/review-decision.entity';
@@ -40,6 +41,7 @@ export const ENTITIES = [
   TissueProfile,
   Shot,
   RetargetJob,
+  LearnJob,
   Take,
   Note,
   ReviewDecision,

@@ -1,6 +1,6 @@
 import { DomainError } from '../common/errors/domain-error';
 
-/** Per retarget job: `queued → solving → solved | failed | canceled`. */
+/** Per learn or retarget job: `queued → solving → solved | failed | canceled`. */
 export enum JobState {
   Queued = 'queued',
   Solving = 'solving',
@@ -18,13 +18,16 @@ export const JOB_TRANSITIONS: Record<JobState, readonly JobState[]> = {
   [JobState.Canceled]: [],
 };
 
+/** True for the states a job never leaves. */
+export const isFinished = (s: JobState): boolean => JOB_TRANSITIONS[s].length === 0;
+
 /** Throws JOB_STATE_INVALID_TRANSITION unless `from → to` is allowed. */
 export function assertJobTransition(from: JobState, to: JobState): void {
   if (JOB_TRANSITIONS[from].includes(to)) return;
   throw new DomainError(
     'conflict',
     'JOB_STATE_INVALID_TRANSITION',
-    `A retarget job cannot go from ${from} to ${to}.`,
+    `A job cannot go from ${from} to ${to}.`,
     { from, to, allowed: JOB_TRANSITIONS[from] },
   );
 }

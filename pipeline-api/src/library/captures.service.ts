@@ -102,9 +102,9 @@ export class CapturesService {
     if (capture.deletedAt) throw deleted(capture);
     if (capture.consentExpired(today)) {
       throw new DomainError(
-        'conflict',
-        'CAPTURE_CONSENT_EXPIRED',
-        `The performer's consent expired on ${capture.consentExpiresOn}: no new learning from this capture.`,
+        'invalid',
+        'CONSENT_EXPIRED',
+        `The performer's consent expired on ${capture.consentExpiresOn}: no new learning from this capture. Record a renewed consent by uploading the capture again.`,
         { captureId: id, expiresOn: capture.consentExpiresOn },
       );
     }

@@ -3,7 +3,13 @@ import type { Asset } from '../assets/entities/asset.entity';
 import type { BoundingBox, Character } from './entities/character.entity';
 import type { Capture } from './entities/capture.entity';
 import type { Clip, ClipFormat } from './entities/clip.entity';
-import type { ProfileState, TissueProfile } from './entities/tissue-profile.entity';
+import type {
+  ProfileMode,
+  ProfileSpectrum,
+  ProfileState,
+  TissueProfile,
+} from './entities/tissue-profile.entity';
+import type { JobView } from '../jobs/job-view';
 import { todayUtc } from '../assets/upload-rules';
 
 /** Check state of the file behind a library item. */
@@ -106,29 +112,37 @@ export const clipView = (c: Clip): ClipView => ({
   createdAt: c.createdAt.toISOString(),
 });
 
-/** A tissue profile as the library lists it. */
+/** A tissue profile as the library lists it, with its learn job. */
 export interface ProfileView {
   id: string;
   name: string;
   captureId: string;
   characterId: string;
   state: ProfileState;
-  modes: unknown[] | null;
-  fitReport: Record<string, unknown> | null;
-  /** When the capture it was learned from was deleted (the profile says so). */
+  /** True once the capture it was learned from is deleted. */
+  captureDeleted: boolean;
+  /** When that capture was deleted. */
   sourceCaptureDeletedAt: string | null;
+  modes: ProfileMode[] | null;
+  fitReport: Record<string, unknown> | null;
+  spectra: ProfileSpectrum[] | null;
+  /** The learn job (null for a profile made without one). */
+  job: JobView | null;
   createdAt: string;
 }
 
-/** The view of a profile. */
-export const profileView = (p: TissueProfile): ProfileView => ({
+/** The view of a profile, with the view of its learn job. */
+export const profileView = (p: TissueProfile, job: JobView | null = null): ProfileView => ({
   id: p.id,
   name: p.name,
   captureId: p.capture.id,
   characterId: p.character.id,
   state: p.state,
+  captureDeleted: !!p.captureDeletedAt,
+  sourceCaptureDeletedAt: p.captureDeletedAt?.toISOString() ?? null,
   modes: p.modes ?? null,
   fitReport: p.fitReport ?? null,
-  sourceCaptureDeletedAt: p.captureDeletedAt?.toISOString() ?? null,
+  spectra: p.spectra ?? null,
+  job,
   createdAt: p.createdAt.toISOString(),
 });

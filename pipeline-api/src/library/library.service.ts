@@ -15,6 +15,8 @@ import {
   type ProfileView,
 } from './library-views';
 import { characterNotFound, clipNotFound, profileNotFound } from './library-errors';
+import { LearnJob } from '../jobs/entities/learn-job.entity';
+import { learnJobView } from '../jobs/job-view';
 
 /** A presigned download of an asset's file. */
 export interface FileLink {
@@ -69,21 +71,24 @@ export class LibraryService {
     return clipView(await this.findClip(showId, id));
   }
 
-  /** The show's tissue profiles, newest first. */
+  /** The show's tissue profiles, newest first, each with its learn job. */
   async profiles(showId: string): Promise<ProfileView[]> {
     const rows = await this.em.find(
       TissueProfile,
       { show: showId },
       { orderBy: { createdAt: 'desc' } },
     );
-    return rows.map(profileView);
+    const jobs = await this.em.find(LearnJob, { profile: { $in: rows.map((p) => p.id) } });
+    const byProfile = new Map(jobs.map((j) => [j.profile.id, learnJobView(j)]));
+    return rows.map((p) => profileView(p, byProfile.get(p.id) ?? null));
   }
 
-  /** One profile of the show. */
+  /** One profile of the show, with its learn job. */
   async profile(showId: string, id: string): Promise<ProfileView> {
     const p = await this.em.findOne(TissueProfile, { id, show: showId });
     if (!p) throw profileNotFound(id);
-    return profileView(p);
+    const job = await this.em.findOne(LearnJob, { profile: p });
+    return profileView(p, job ? learnJobView(job) : null);
   }
 
   /** A download link for a character's file. */

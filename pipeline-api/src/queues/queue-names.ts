@@ -3,4 +3,6 @@ export const QUEUES = {
   diagnostics: 'diagnostics',
   mail: 'mail',
   ingest: 'ingest',
+  learn: 'learn',
+  retarget: 'retarget',
 } as const;

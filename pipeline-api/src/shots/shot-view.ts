@@ -25,7 +25,7 @@ export interface ShotView {
 }
 
 /** Late: the due date has passed and the shot's latest take is not approved. */
-export const isLate = (s: Shot, today: string): boolean =>
+export const isLate = (s: Pick<Shot, 'dueDate' | 'reviewState'>, today: string): boolean =>
   !!s.dueDate && s.dueDate < today && s.reviewState !== ReviewState.Approved;
 
 /** The view of a shot (assignees populated). */

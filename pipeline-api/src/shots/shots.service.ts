@@ -15,7 +15,7 @@ import { characterNotFound, clipNotFound } from '../library/library-errors';
 import { Shot } from './entities/shot.entity';
 import { assertRenderTransition, type RenderState } from './render-state';
 import { shotView, type ShotView } from './shot-view';
-import { shotFilter, shotPage } from './shot-query';
+import { shotRange } from './shot-rows';
 import type { CreateShotDto, UpdateShotDto } from './dto/shot-fields.dto';
 import type { ListShotsQuery } from './dto/list-shots.query';
 
@@ -42,17 +42,13 @@ export class ShotsService {
     private readonly audit: AuditService,
   ) {}
 
-  /** One page of the show's shots. */
+  /** One page of the show's shots with the number of matches (plain rows, one query). */
   async list(showId: string, q: ListShotsQuery): Promise<ShotPage> {
     const page = q.page ?? 1;
     const pageSize = q.pageSize ?? 50;
-    const today = todayUtc();
-    const [rows, total] = await this.em.findAndCount(
-      Shot,
-      shotFilter(showId, q, today),
-      shotPage(q.sort, pageSize, (page - 1) * pageSize),
-    );
-    return { items: rows.map((s) => shotView(s, today)), total, page, pageSize };
+    const range = { limit: pageSize, offset: (page - 1) * pageSize };
+    const { items, total } = await shotRange(this.em, showId, q, todayUtc(), range);
+    return { items, total, page, pageSize };
   }
 
   /** One shot of the show. */

@@ -6,9 +6,8 @@ import { todayUtc } from '../assets/upload-rules';
 import { RenderState } from './render-state';
 import { JobState } from '../jobs/job-state';
 import { ReviewState } from '../takes/review-state';
-import { Shot } from './entities/shot.entity';
-import { shotFilter, shotOrder, shotPage } from './shot-query';
-import { shotView, type ShotView } from './shot-view';
+import { countShots, shotRows } from './shot-rows';
+import type { ShotView } from './shot-view';
 import { isoWeek, weekStart } from './iso-week';
 import { csvLine } from './csv';
 import type { ShotFilterQuery } from './dto/list-shots.query';
@@ -103,12 +102,9 @@ export class TrackingService {
       summary.solve[r.solve_state ?? 'none'] += n;
       summary.review[r.review_state ?? 'none'] += n;
     }
-    const late = shotFilter(showId, { late: true }, today);
-    summary.late.count = await this.em.count(Shot, late);
-    const lateShots = await this.em.find(Shot, late, {
-      orderBy: shotOrder('dueDate:asc,code:asc'),
-      limit: 100,
-    });
+    const late = { late: true, sort: 'dueDate:asc,code:asc' };
+    summary.late.count = await countShots(this.em, showId, late, today);
+    const lateShots = await shotRows(this.em, showId, late, today, { limit: 100, offset: 0 });
     summary.late.shots = lateShots.map((s) => ({
       id: s.id,
       code: s.code,
@@ -139,15 +135,13 @@ export class TrackingService {
   /** Streams the shots matching the filters as CSV: a header row, then one row per shot. */
   async exportCsv(showId: string, filter: ShotFilterQuery, out: Writable): Promise<void> {
     const today = todayUtc();
-    const where = shotFilter(showId, filter, today);
     const write = async (line: string) => {
       if (!out.write(line)) await once(out, 'drain');
     };
     await write(csvLine(CSV_HEADER));
     for (let offset = 0; ; offset += EXPORT_BATCH) {
-      const batch = await this.em.find(Shot, where, shotPage(filter.sort, EXPORT_BATCH, offset));
-      for (const shot of batch) await write(csvLine(csvRow(shotView(shot, today))));
-      this.em.clear();
+      const batch = await shotRows(this.em, showId, filter, today, { limit: EXPORT_BATCH, offset });
+      for (const shot of batch) await write(csvLine(csvRow(shot)));
       if (batch.length < EXPORT_BATCH) break;
     }
   }

@@ -1,5 +1,5 @@
-import { Controller, Get, Param } from '@nestjs/common';
-import { ApiOperation, ApiTags } from '@nestjs/swagger';
+import { Controller, Get, Param, StreamableFile } from '@nestjs/common';
+import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { Allow, AllowToken, ANY_ROLE } from '../common/decorators/access.decorators';
 import { ApiErrors } from '../common/decorators/api-errors.decorator';
 import { uuidParam } from '../common/uuid-param';
@@ -35,5 +35,24 @@ export class TakesController {
     @Param('takeId', uuidParam('TAKE_NOT_FOUND')) id: string,
   ): Promise<TakeView> {
     return this.takes.get(showId, id);
+  }
+
+  /** The take as a standard glTF binary file, for the player, lighting and rendering. */
+  @Get('takes/:takeId/file')
+  @ApiOperation({ summary: "Download a take's .glb file" })
+  @ApiOkResponse({
+    description: 'The take (glTF binary).',
+    content: { 'model/gltf-binary': { schema: { type: 'string', format: 'binary' } } },
+  })
+  @ApiErrors('SHOW_NOT_FOUND', 'TAKE_NOT_FOUND', 'STORAGE_UNAVAILABLE')
+  async file(
+    @Param('showId') showId: string,
+    @Param('takeId', uuidParam('TAKE_NOT_FOUND')) id: string,
+  ): Promise<StreamableFile> {
+    const { stream, fileName } = await this.takes.file(showId, id);
+    return new StreamableFile(stream, {
+      type: 'model/gltf-binary',
+      disposition: `attachment; filename="${fileName}"`,
+    });
   }
 }

@@ -1,6 +1,7 @@
+import type { Readable } from 'node:stream';
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/mariadb';
-import type { EntityManager as AnyEntityManager } from '@mikro-orm/core';
+import { LockMode, type EntityManager as AnyEntityManager } from '@mikro-orm/core';
 import { DomainError } from '../common/errors/domain-error';
 import { Env } from '../config/env.validation';
 import { MailOutboxService } from '../mail/mail-outbox.service';
@@ -12,6 +13,8 @@ import { takeView, type TakeView } from './take-view';
 import { mailTakeRecipients, takeLabel, takeLink } from './take-mail';
 import { shotNotFound } from '../shots/shots.service';
 import { Shot } from '../shots/entities/shot.entity';
+import { StorageService } from '../storage/storage.service';
+import { storageUnavailable } from '../assets/asset-errors';
 
 /** What a finished job produced. */
 export interface TakeResult {
@@ -32,6 +35,7 @@ export class TakesService {
     private readonly em: EntityManager,
     private readonly outbox: MailOutboxService,
     private readonly env: Env,
+    private readonly storage: StorageService,
   ) {}
 
   /**
@@ -50,6 +54,9 @@ export class TakesService {
     }
     const existing = await em.findOne(Take, { job: job.id });
     if (existing) return existing;
+    // Inside the job's transaction, the shot row lock makes concurrent jobs of one shot take
+    // v1, v2, … in turn instead of racing for the same number (takes_shot_id_version_unique).
+    if (em.isInTransaction()) await em.lock(job.shot, LockMode.PESSIMISTIC_WRITE);
     const latest = await em.findOne(Take, { shot: job.shot }, { orderBy: { version: 'desc' } });
     const take = new Take(job, (latest?.version ?? 0) + 1, result);
     em.persist(take);
@@ -85,6 +92,33 @@ export class TakesService {
   /** One take of the show. */
   async get(showId: string, id: string): Promise<TakeView> {
     return takeView(await this.find(showId, id));
+  }
+
+  /** The take's .glb file, to stream, with a file name that says show, shot and version. */
+  async file(showId: string, id: string): Promise<{ stream: Readable; fileName: string }> {
+    const take = await this.em.findOne(Take, { id, show: showId }, { populate: ['shot', 'show'] });
+    if (!take) throw takeNotFound(id);
+    const key = take.files.find((f) => f.endsWith('.glb'));
+    if (!key) throw takeNotFound(id);
+    try {
+      return {
+        stream: await this.storage.stream(key),
+        fileName: `${take.show.code}_${take.shot.code}_v${take.version}.glb`.replace(
+          /[^A-Za-z0-9._-]/g,
+          '_',
+        ),
+      };
+    } catch (e) {
+      if ((e as { name?: string }).name !== 'NoSuchKey') throw storageUnavailable(e);
+      throw new DomainError(
+        'not_found',
+        'TAKE_NOT_FOUND',
+        `Take ${id} has no file in the S3 store.`,
+        {
+          takeId: id,
+        },
+      );
+    }
   }
 
   /** One take of the show, with its job and shot. */

@@ -41,6 +41,8 @@ const TA: readonly Role[] = [Role.TechnicalArtist];
 const CAPTURE_READERS: readonly Role[] = [Role.TechnicalArtist, Role.Supervisor, Role.Producer];
 /** product.md: animators and supervisors write notes. */
 const NOTE_WRITERS: readonly Role[] = [Role.Animator, Role.Supervisor];
+/** product.md: technical artists submit retarget jobs; animators submit re-solves. */
+const JOB_SUBMITTERS: readonly Role[] = [Role.TechnicalArtist, Role.Animator];
 /** product.md: supervisors resolve notes and decide on takes. */
 const SUPERVISORS: readonly Role[] = [Role.Supervisor];
 
@@ -97,6 +99,9 @@ export const ROUTE_TABLE: RouteRow[] = [
   { route: 'GET /api/shows/:showId/clips/:clipId/file', roles: ANYONE },
   { route: 'GET /api/shows/:showId/profiles', roles: ANYONE },
   { route: 'GET /api/shows/:showId/profiles/:profileId', roles: ANYONE },
+  { route: 'GET /api/shows/:showId/profiles/:profileId/file', roles: ANYONE },
+  // product.md: technical artists learn profiles; a pipeline token submits jobs.
+  { route: 'POST /api/shows/:showId/profiles', roles: TA, token: TokenScope.JobsSubmit },
   { route: 'GET /api/shows/:showId/captures', roles: CAPTURE_READERS },
   { route: 'GET /api/shows/:showId/captures/:captureId', roles: CAPTURE_READERS },
   { route: 'GET /api/shows/:showId/captures/:captureId/file', roles: CAPTURE_READERS },
@@ -126,6 +131,25 @@ export const ROUTE_TABLE: RouteRow[] = [
     token: TokenScope.TakesRead,
   },
   { route: 'GET /api/shows/:showId/takes/:takeId', roles: ANYONE, token: TokenScope.TakesRead },
+  {
+    route: 'GET /api/shows/:showId/takes/:takeId/file',
+    roles: ANYONE,
+    token: TokenScope.TakesRead,
+  },
+
+  // Jobs: every member follows them (a token reads one, e.g. the job it submitted); technical
+  // artists submit retargets and animators re-solves ("save as new take"), tokens with
+  // jobs:submit too. Canceling passes the access rules for every member: who submitted it is
+  // checked on the job itself (admins, technical artists or the submitter).
+  { route: 'GET /api/shows/:showId/jobs', roles: ANYONE },
+  { route: 'GET /api/shows/:showId/jobs/:jobId', roles: ANYONE, token: 'any' },
+  { route: 'POST /api/shows/:showId/jobs/:jobId/cancel', roles: ANYONE },
+  {
+    route: 'POST /api/shows/:showId/shots/:shotId/jobs',
+    roles: JOB_SUBMITTERS,
+    token: TokenScope.JobsSubmit,
+  },
+  { route: 'GET /api/shows/:showId/shots/:shotId/joint-map', roles: JOB_SUBMITTERS },
 
   // Review.
   { route: 'GET /api/shows/:showId/takes/:takeId/notes', roles: ANYONE },

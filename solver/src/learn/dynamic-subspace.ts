@@ -38,9 +38,12 @@ export interface DynamicSubspace {
   coefficients: Float64Array;
   /** Norms of X along each basis row over all frames (the singular values after projection). */
   singularValues: Float64Array;
-  rank: RankChoice;
+  /** The rank decision of a whole-body decomposition (null for directions found per region). */
+  rank: RankChoice | null;
   /** Dimension of the corrective span projected out. */
   correctiveRank: number;
+  /** Region index of each basis row (null for a whole-body decomposition). */
+  region: Int32Array | null;
 }
 
 /**
@@ -92,5 +95,66 @@ export function dynamicSubspace(
     for (let r = 0; r < t; r++) s += coefficients[r * k + q] ** 2;
     return Math.sqrt(s);
   });
-  return { k, basis, coefficients, singularValues, rank, correctiveRank: spanRank };
+  return { k, basis, coefficients, singularValues, rank, correctiveRank: spanRank, region: null };
+}
+
+/**
+ * The dynamic basis from tissue directions `rows` (K rows of D, with their `region`): made
+ * orthogonal to `correctiveSpan` and orthonormal (rows that vanish are dropped), sign-fixed, ordered
+ * by the energy of `dynamic` (T×D) along them, with its coefficients.
+ */
+export function basisFromDirections(
+  dynamic: Float32Array,
+  t: number,
+  d: number,
+  rows: Float64Array,
+  region: Int32Array,
+  correctiveSpan: Float64Array,
+  spanRank: number,
+): DynamicSubspace {
+  const k0 = region.length;
+  const work = Float64Array.from(rows.subarray(0, k0 * d));
+  for (let q = 0; q < k0; q++) {
+    for (let pass = 0; pass < 2; pass++) {
+      for (let s = 0; s < spanRank; s++) {
+        let dot = 0;
+        for (let c = 0; c < d; c++) dot += work[q * d + c] * correctiveSpan[s * d + c];
+        for (let c = 0; c < d; c++) work[q * d + c] -= dot * correctiveSpan[s * d + c];
+      }
+    }
+  }
+  orthonormaliseRows(work, d, k0);
+  const alive: number[] = [];
+  for (let q = 0; q < k0; q++)
+    if (work.subarray(q * d, (q + 1) * d).some((v) => v !== 0)) alive.push(q);
+  let k = alive.length;
+  let basis = new Float64Array(k * d);
+  alive.forEach((q, i) => basis.set(work.subarray(q * d, (q + 1) * d), i * d));
+  let coefficients = multiplyByRows(dynamic, t, d, basis, k);
+  const energy = Float64Array.from({ length: k }, (_, q) => {
+    let s = 0;
+    for (let r = 0; r < t; r++) s += coefficients[r * k + q] ** 2;
+    return s;
+  });
+  const order = [...energy.keys()].sort((a, b) => energy[b] - energy[a] || a - b);
+  const sorted = new Float64Array(k * d);
+  const sortedC = new Float64Array(t * k);
+  order.forEach((q, i) => {
+    sorted.set(basis.subarray(q * d, (q + 1) * d), i * d);
+    for (let r = 0; r < t; r++) sortedC[r * k + i] = coefficients[r * k + q];
+  });
+  basis = sorted;
+  coefficients = sortedC;
+  k = order.length;
+  fixSigns(basis, d, k, coefficients, t);
+  const singularValues = Float64Array.from(order, (q) => Math.sqrt(energy[q]));
+  return {
+    k,
+    basis,
+    coefficients,
+    singularValues,
+    rank: null,
+    correctiveRank: spanRank,
+    region: Int32Array.from(order, (q) => region[alive[q]]),
+  };
 }

@@ -1,42 +1,37 @@
-// Learn: character + capture → tissue profile. validate → poses → unpose → separate pose-driven
-// from dynamic → dynamic basis → drivers → ARX dynamics → modes → spectra → fit report.
-// The pose-driven fit on the low-passed residual would also take up the low-frequency part of the
-// tissue's own response (sag under gravity, slow sway), which is correlated with pose. Three
-// measures keep it out (relative error of the pose-driven part on the synthetic demo capture,
-// noise-free, 10 s, 0.74 with none of them): (1) every joint's specific force and its first two
-// derivatives compete with the pose features in the fit and are then dropped, since they carry
-// the quasi-static tissue response; (2) the cut-off is 0.8 Hz, half the lowest expected tissue
-// mode (1.5 Hz), with the features filtered alike so the pose relation survives the filter;
-// (3) where the full-band pose fit leaves under 5 % of a vertex's residual there is no tissue
-// motion to protect, so the full-band fit is kept (a low-pass would blunt fast correctives).
-// Together: 0.10 (0.27 on the noisy 8 s capture, from 20). Optional refinement passes identify
-// dynamics from the current dynamic residual, run them freely from the driver inputs, and refit
-// the correctives to the residual minus that input-driven motion (off by default: with drivers
-// chosen automatically it can diverge).
-import { driverInputs } from '../dynamics/driver-inputs.js';
-import { identifyDynamics } from '../dynamics/identify.js';
+// Learn: character + capture → tissue profile. validate → poses → unpose → tissue directions per
+// region → pose-driven correctives fitted with those directions projected out → dynamic basis
+// (orthogonal to the corrective span) → dynamics per region (drivers, signals, ARX, output-error
+// refinement, stability) → modes → spectra → fit report.
+// Separation approaches tried, relative error of the pose-driven part on the synthetic demo
+// captures (noise-free 10 s / noisy 8 s): a pose fit on the 0.8 Hz low-passed residual with every
+// joint's specific force competing and the full-band fit where it explains a vertex, 0.10 / 0.27
+// (the tissue's slow sag under gravity follows the limbs' pose and leaked into the correctives);
+// alternating that fit with identified dynamics, 0.14 / 0.36 after three passes (the dynamics
+// learned from the leaky residual carried the leak back); projecting out a whole-body dynamic
+// basis, 0.05 / 0.13 after four passes (the basis took in corrective shapes); per-region
+// directions screened against the pose, 0.0004 / 0.05 in one pass.
 import { identifyModes } from '../dynamics/modes.js';
-import { arxOfDynamics, freeRun } from '../dynamics/simulate.js';
+import { arxOfDynamics } from '../dynamics/simulate.js';
 import { SolverInputError } from '../errors.js';
 import { validateCapture } from '../io/validate-capture.js';
 import { profileId } from '../io/profile-format.js';
+import { multiplyByRows } from '../linalg/gram-kernel.js';
 import { frobeniusSquared } from '../linalg/subspace.js';
 import { estimatePoses } from '../rig/pose-estimate.js';
 import { unpose } from '../rig/unpose.js';
-import type { Capture, Character, Driver, TissueProfile } from '../types.js';
+import type { Capture, Character, TissueProfile } from '../types.js';
 import { checkFinite, checkMoves, clipForCapture } from './check-capture.js';
 import { correctiveSpan } from './corrective-span.js';
 import { LEARN_DEFAULTS, type LearnOptions, type LearnStage } from './learn-options.js';
 
 export { LEARN_DEFAULTS, type LearnOptions, type LearnStage };
-import { dynamicSubspace, type DynamicSubspace } from './dynamic-subspace.js';
+import { basisFromDirections, type DynamicSubspace } from './dynamic-subspace.js';
 import { fitReport } from './fit-report.js';
 import { FEATURES_PER_JOINT, poseFeatures } from './pose-features.js';
 import { modesMatchPeaks, regionSpectra, type RegionSpectrum } from './region-spectra.js';
-import { separatePoseDriven, type Separation } from './separate.js';
-import { preferFullBand } from './full-band.js';
-import { separationSignals } from './separation-signals.js';
-import { selectDrivers } from './select-drivers.js';
+import { identifyRegions } from './identify-regions.js';
+import { regionDirections } from './region-directions.js';
+import { separatePoseDriven } from './separate.js';
 
 /** A learned profile with what was measured on the way. */
 export interface LearnResult {
@@ -92,12 +87,6 @@ export function learnProfile(
   const n = character.restPositions.length / 3;
   const d = 3 * n;
   const fps = capture.fps;
-  const rankOptions = {
-    varianceTarget: opts.varianceTarget,
-    maxRank: opts.maxModes,
-    noiseFactor: opts.noiseFactor,
-    minEnergyShare: opts.minEnergyShare,
-  };
   stage('validate', 1, () => {
     validateCapture(character, capture, { minSeconds: opts.minSeconds });
     checkFinite(capture);
@@ -113,92 +102,33 @@ export function learnProfile(
     T * character.skeleton.names.length * FEATURES_PER_JOINT,
   );
   const trainEnd = Math.max(4, Math.round(T * (1 - opts.heldOutFraction)));
-  const passes = opts.refinementPasses + 1;
   const sg = { halfWidth: opts.derivativeHalfWidth, degree: opts.derivativeDegree };
-  const competing = opts.separationInputs
-    ? separationSignals(character.skeleton, clip, opts.separationDerivatives, sg)
-    : null;
-  let target = residuals;
-  let sep: Separation | null = null;
-  let drivers: Driver[] = [];
-  let inputs: ReturnType<typeof driverInputs> | null = null;
-  const dynamic = new Float32Array(T * d);
-  for (let pass = 0; pass < passes; pass++) {
-    const s = stage('separate', 1 / passes, () =>
-      separatePoseDriven(target, T, character, features, fps, {
-        cutoffHz: opts.cutoffHz,
-        competing,
-      }),
-    );
-    sep = s;
-    for (let i = 0; i < dynamic.length; i++) dynamic[i] = residuals[i] - s.poseDisplacement[i];
-    if (pass === passes - 1) break;
-    const sub = stage('subspace', 0.5 / passes, () =>
-      dynamicSubspace(
-        Float32Array.from(dynamic),
-        T,
-        d,
-        new Float64Array(0),
-        0,
-        rankOptions,
-        opts.subspaceMethod,
-        opts.seed,
-      ),
-    );
-    if (sub.k === 0) break;
-    stage('dynamics', 0.5 / passes, () => {
-      if (!inputs) {
-        drivers = selectDrivers(character, sub.basis, sub.k, { maxDrivers: opts.maxDrivers });
-        inputs = driverInputs(character.skeleton, clip, drivers, sg);
-      }
-      const id = identifyDynamics(
-        sub.coefficients,
-        inputs.values,
-        inputs.rest,
-        T,
-        sub.k,
-        inputs.m,
-        trainEnd,
-      );
-      const sim = new Float64Array(T * sub.k);
-      sim.set(sub.coefficients.subarray(0, 2 * sub.k));
-      freeRun(
-        arxOfDynamics(id.dynamics),
-        id.scaledInputs,
-        2,
-        T,
-        sub.coefficients.slice(0, 2 * sub.k),
-        sim,
-      );
-      // Next target: the residual minus the input-driven dynamic motion.
-      const next = Float32Array.from(residuals);
-      for (let t = 0; t < T; t++) {
-        for (let q = 0; q < sub.k; q++) {
-          const w = sim[t * sub.k + q];
-          for (let c = 0; c < d; c++) next[t * d + c] -= w * sub.basis[q * d + c];
-        }
-      }
-      target = next;
-    });
-  }
-  let separation = sep as Separation;
-  if (opts.fullBandUnexplained > 0) {
-    const full = stage('separate', 0, () =>
-      separatePoseDriven(residuals, T, character, features, fps, {
-        cutoffHz: fps,
-        competing: null,
-      }),
-    );
-    separation = preferFullBand(
-      separation,
-      full,
-      residuals,
+  // Tissue directions per region, found in the residual itself; the pose-driven fit then sees the
+  // residual with them projected out, so tissue motion (its slow sag included) cannot leak into
+  // the correctives, and the correctives' own shapes never enter the tissue directions.
+  const directions = stage('subspace', 0.5, () =>
+    regionDirections(residuals, T, character, features, {
+      maxDirections: opts.maxModes,
+      noiseFactor: opts.noiseFactor,
+      minEnergyShare: opts.minEnergyShare,
+      poseExplained: opts.poseExplained,
+      method: opts.subspaceMethod,
+      seed: opts.seed,
+    }),
+  );
+  const separation = stage('separate', 1, () =>
+    separatePoseDriven(
+      withoutDirections(residuals, T, d, directions.basis, directions.k),
       T,
-      opts.fullBandUnexplained,
-    ).separation;
-    for (let i = 0; i < dynamic.length; i++)
-      dynamic[i] = residuals[i] - separation.poseDisplacement[i];
-  }
+      character,
+      features,
+      fps,
+      { cutoffHz: opts.cutoffHz, perGroupRidge: true },
+    ),
+  );
+  const dynamic = new Float32Array(T * d);
+  for (let i = 0; i < dynamic.length; i++)
+    dynamic[i] = residuals[i] - separation.poseDisplacement[i];
   // Corrective span: the dominant directions of the pose-driven displacement, keeping only those
   // along which the pose-driven part moves more than the dynamic residual does (a direction the
   // dynamics dominate is tissue motion the correctives took up, not a corrective shape).
@@ -206,7 +136,7 @@ export function learnProfile(
     correctiveSpan(separation.poseDisplacement, dynamic, T, d, opts),
   );
   const sub = stage('subspace', 0.25, () =>
-    dynamicSubspace(dynamic, T, d, span.basis, span.k, rankOptions, opts.subspaceMethod, opts.seed),
+    basisFromDirections(dynamic, T, d, directions.basis, directions.region, span.basis, span.k),
   );
   if (sub.k === 0) {
     throw new SolverInputError(
@@ -215,19 +145,24 @@ export function learnProfile(
       { item: capture.name },
     );
   }
-  if (!inputs || drivers.length === 0) {
-    drivers = selectDrivers(character, sub.basis, sub.k, { maxDrivers: opts.maxDrivers });
-    inputs = driverInputs(character.skeleton, clip, drivers, sg);
-  }
-  const inp = inputs as ReturnType<typeof driverInputs>;
   const id = stage('dynamics', 1, () =>
-    identifyDynamics(sub.coefficients, inp.values, inp.rest, T, sub.k, inp.m, trainEnd),
+    identifyRegions(
+      sub.coefficients,
+      T,
+      sub.basis,
+      sub.region as Int32Array,
+      character,
+      clip,
+      trainEnd,
+      { maxDrivers: opts.maxDrivers, sg },
+    ),
   );
+  const drivers = id.drivers;
   const modes = stage('modes', 1, () =>
-    identifyModes(id.dynamics, fps, sub.coefficients, T, sub.basis, character.regions),
+    identifyModes(id.dynamics, fps, sub.coefficients, T, sub.basis, directions.regions),
   );
   const spectra = stage('spectra', 1, () =>
-    regionSpectra(sub.basis, sub.k, sub.coefficients, T, fps, character.regions),
+    regionSpectra(sub.basis, sub.k, sub.coefficients, T, fps, directions.regions),
   );
   const total = frobeniusSquared(residuals) || 1;
   let poseErr = 0;
@@ -252,22 +187,18 @@ export function learnProfile(
     name: opts.name ?? capture.name,
     fps,
     settings: {
-      cutoffHz: opts.cutoffHz,
+      cutoffHz: Number.isFinite(opts.cutoffHz) ? opts.cutoffHz : 'off',
       maxModes: opts.maxModes,
-      varianceTarget: opts.varianceTarget,
       noiseFactor: opts.noiseFactor,
       minEnergyShare: opts.minEnergyShare,
+      poseExplained: opts.poseExplained,
       heldOutFraction: opts.heldOutFraction,
-      refinementPasses: opts.refinementPasses,
-      separationInputs: opts.separationInputs,
-      separationDerivatives: opts.separationDerivatives,
-      fullBandUnexplained: opts.fullBandUnexplained,
       derivativeHalfWidth: opts.derivativeHalfWidth,
       derivativeDegree: opts.derivativeDegree,
       seed: opts.seed,
       basisSize: sub.k,
       correctiveSpanRank: span.k,
-      inputRidge: id.lambda,
+      inputRidge: id.fits.map((f) => f.lambda).join(' '),
       clipSource,
     },
     source: character,
@@ -290,4 +221,24 @@ export function learnProfile(
     subspace: sub,
     correctiveSpan: span.basis,
   };
+}
+
+/** The residual (T×D) with its components along the orthonormal `rows` (K×D) removed. */
+function withoutDirections(
+  residuals: Float32Array,
+  frames: number,
+  d: number,
+  rows: Float64Array,
+  k: number,
+): Float32Array {
+  const out = Float32Array.from(residuals);
+  if (k === 0) return out;
+  const along = multiplyByRows(residuals, frames, d, rows, k);
+  for (let t = 0; t < frames; t++) {
+    for (let q = 0; q < k; q++) {
+      const w = along[t * k + q];
+      for (let c = 0; c < d; c++) out[t * d + c] -= w * rows[q * d + c];
+    }
+  }
+  return out;
 }

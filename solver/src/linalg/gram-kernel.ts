@@ -1,17 +1,36 @@
 // Big products over frame-major snapshot matrices X (T rows of D = 3N floats): the T×T Gram XXᵀ,
-// and the two thin products (XᵀV)ᵀ (K×D) and XWᵀ (T×K). These dominate learning.
+// and the two thin products (XᵀV)ᵀ (K×D) and XWᵀ (T×K). These dominate the subspace stage of
+// learning. The loops live in product-kernels.ts; with startKernelThreads (Node) each product is
+// split over worker threads, else it runs on the calling thread.
 //
-// Approaches tried (Gram of 600 × 22,686 Float32 snapshots, Node 20 on this 2-core machine;
-// bench/learn.bench.ts prints the current figures):
+// Approaches tried (Gram of 600 × 22,686 Float32 snapshots = 4.1·10⁹ multiply-adds; Node 20 on
+// this 2-core machine, shared with other jobs at load average 3–22 while measuring, so wall
+// times moved by up to 5×; "cpu" is the busiest thread's CPU time, which is what the wall time
+// would be with a free core per thread; bench/product-kernels.bench.ts prints both):
 // - ml-matrix mmul: about 27 s (extrapolated from a 2,000-column slice).
 // - plain loop, one dot product per (i, j) pair: 8.3 s.
-// - column blocks of BLOCK floats (rows stay in cache), one row i against four rows j: 4.2 s.
-// - kept: column blocks with 4 × 4 register blocks (each load feeds four sums): 2.4 s.
-// - not tried yet: a WASM-SIMD compute library from the registry, and splitting the (i, j) blocks
-//   over worker threads.
-
-/** Floats per column block: 600 rows × 512 × 4 bytes stay within a typical L2 cache. */
-const BLOCK = 512;
+// - column blocks of 512 floats, one row i against four rows j: 4.2 s.
+// - ml-matrix mmul, same run as the rows below: 21 s cpu (from a 2,000-column slice); plain loop
+//   5.9 s cpu (×3.5 ml-matrix).
+// - column blocks with 4 × 4 register blocks (each load feeds four sums): 2.0 s cpu (×10.4
+//   ml-matrix) — kept.
+// - the same over 64–256-column tiles packed into contiguous Float64 first, or 2 × 4 blocks:
+//   2.0 s cpu, no better (scalar JavaScript is compute-bound here, and Float32 arithmetic is no
+//   faster than Float64 in it, so Float32 buys nothing in this kernel).
+// - tfjs-core 4.22 + tfjs-backend-wasm SIMD matMul (Float32 sums, relative error 1e-6–1e-5):
+//   with transposeB 6.0 s cpu (its transposed path is not the fast one); on a pre-transposed
+//   copy 0.73 s cpu, 2.8× the kernel (×29 ml-matrix). Not kept: it would be a runtime dependency
+//   (it is a devDependency, for this comparison) and its sums are Float32.
+// - the kernel split over worker threads (kernel-threads.ts), 1 worker + the calling thread:
+//   busiest thread 0.98 s cpu (2.1× one thread, ×21 ml-matrix; bit-identical result); 2 workers:
+//   0.63 s cpu each, but 3 threads on 2 cores gain nothing in wall time. Kept, as an option
+//   (Node only): with one worker the wall time fell from 5.8 to 3.2 s even at load average 11.
+// (XᵀV)ᵀ was an axpy per (row, column) pair, reading and writing the output: 1.27 s cpu for
+// K = 42; a 4 × 4 register block over packed 16-column slabs sums each output in registers:
+// 0.33 s cpu (3.8×; 0.18 s with one worker). XWᵀ with 4 × 4 blocks instead of 1 × 4: 0.31 against
+// 0.43 s cpu (0.16 s with one worker).
+import { splitProduct } from './kernel-threads.js';
+import { byRowsShare, gramShare, transposedShare } from './product-kernels.js';
 
 /** Gram matrix XXᵀ (T×T, Float64, row-major) of the row-major T×D matrix X. */
 export function snapshotGram(
@@ -21,67 +40,7 @@ export function snapshotGram(
   out = new Float64Array(t * t),
 ): Float64Array {
   out.fill(0);
-  for (let c0 = 0; c0 < d; c0 += BLOCK) {
-    const c1 = Math.min(d, c0 + BLOCK);
-    let i = 0;
-    // 4 × 4 register blocks: every loaded value feeds four accumulators.
-    for (; i + 4 <= t; i += 4) {
-      const a0 = i * d, a1 = a0 + d, a2 = a1 + d, a3 = a2 + d; // prettier-ignore
-      let j = 0;
-      for (; j + 4 <= i + 4; j += 4) {
-        const b0 = j * d, b1 = b0 + d, b2 = b1 + d, b3 = b2 + d; // prettier-ignore
-        let s00 = 0, s01 = 0, s02 = 0, s03 = 0, s10 = 0, s11 = 0, s12 = 0, s13 = 0; // prettier-ignore
-        let s20 = 0, s21 = 0, s22 = 0, s23 = 0, s30 = 0, s31 = 0, s32 = 0, s33 = 0; // prettier-ignore
-        for (let c = c0; c < c1; c++) {
-          const x0 = x[a0 + c], x1 = x[a1 + c], x2 = x[a2 + c], x3 = x[a3 + c]; // prettier-ignore
-          const y0 = x[b0 + c], y1 = x[b1 + c], y2 = x[b2 + c], y3 = x[b3 + c]; // prettier-ignore
-          s00 += x0 * y0;
-          s01 += x0 * y1;
-          s02 += x0 * y2;
-          s03 += x0 * y3; // prettier-ignore
-          s10 += x1 * y0;
-          s11 += x1 * y1;
-          s12 += x1 * y2;
-          s13 += x1 * y3; // prettier-ignore
-          s20 += x2 * y0;
-          s21 += x2 * y1;
-          s22 += x2 * y2;
-          s23 += x2 * y3; // prettier-ignore
-          s30 += x3 * y0;
-          s31 += x3 * y1;
-          s32 += x3 * y2;
-          s33 += x3 * y3; // prettier-ignore
-        }
-        const o0 = i * t + j, o1 = o0 + t, o2 = o1 + t, o3 = o2 + t; // prettier-ignore
-        out[o0] += s00;
-        out[o0 + 1] += s01;
-        out[o0 + 2] += s02;
-        out[o0 + 3] += s03; // prettier-ignore
-        out[o1] += s10;
-        out[o1 + 1] += s11;
-        out[o1 + 2] += s12;
-        out[o1 + 3] += s13; // prettier-ignore
-        out[o2] += s20;
-        out[o2 + 1] += s21;
-        out[o2 + 2] += s22;
-        out[o2 + 3] += s23; // prettier-ignore
-        out[o3] += s30;
-        out[o3 + 1] += s31;
-        out[o3 + 2] += s32;
-        out[o3 + 3] += s33; // prettier-ignore
-      }
-    }
-    // Leftover rows (t not a multiple of 4).
-    for (; i < t; i++) {
-      const oi = i * d;
-      for (let j = 0; j <= i; j++) {
-        const oj = j * d;
-        let s = 0;
-        for (let c = c0; c < c1; c++) s += x[oi + c] * x[oj + c];
-        out[i * t + j] += s;
-      }
-    }
-  }
+  if (!splitProduct({ kind: 'gram', x, t, d, out })) gramShare(x, t, d, out, 0, 1);
   // The 4 × 4 diagonal blocks filled both triangles; mirror the lower triangle everywhere.
   for (let i = 0; i < t; i++) for (let j = i + 1; j < t; j++) out[i * t + j] = out[j * t + i];
   return out;
@@ -99,18 +58,8 @@ export function multiplyTransposed(
   k: number,
   out = new Float64Array(k * d),
 ): Float64Array {
-  out.fill(0);
-  for (let c0 = 0; c0 < d; c0 += BLOCK) {
-    const c1 = Math.min(d, c0 + BLOCK);
-    for (let r = 0; r < t; r++) {
-      const ox = r * d;
-      for (let q = 0; q < k; q++) {
-        const w = v[r * k + q];
-        if (w === 0) continue;
-        const oo = q * d;
-        for (let c = c0; c < c1; c++) out[oo + c] += w * x[ox + c];
-      }
-    }
+  if (!splitProduct({ kind: 'transposed', x, t, d, y: v, k, out })) {
+    transposedShare(x, t, d, v, k, out, 0, d);
   }
   return out;
 }
@@ -128,33 +77,6 @@ export function multiplyByRows(
   out = new Float64Array(t * k),
 ): Float64Array {
   out.fill(0);
-  for (let c0 = 0; c0 < d; c0 += BLOCK) {
-    const c1 = Math.min(d, c0 + BLOCK);
-    for (let r = 0; r < t; r++) {
-      const ox = r * d;
-      let q = 0;
-      for (; q + 4 <= k; q += 4) {
-        const o0 = q * d, o1 = o0 + d, o2 = o1 + d, o3 = o2 + d; // prettier-ignore
-        let s0 = 0, s1 = 0, s2 = 0, s3 = 0; // prettier-ignore
-        for (let c = c0; c < c1; c++) {
-          const xv = x[ox + c];
-          s0 += xv * w[o0 + c];
-          s1 += xv * w[o1 + c];
-          s2 += xv * w[o2 + c];
-          s3 += xv * w[o3 + c];
-        }
-        out[r * k + q] += s0;
-        out[r * k + q + 1] += s1;
-        out[r * k + q + 2] += s2;
-        out[r * k + q + 3] += s3;
-      }
-      for (; q < k; q++) {
-        const oq = q * d;
-        let s = 0;
-        for (let c = c0; c < c1; c++) s += x[ox + c] * w[oq + c];
-        out[r * k + q] += s;
-      }
-    }
-  }
+  if (!splitProduct({ kind: 'byRows', x, t, d, y: w, k, out })) byRowsShare(x, d, w, k, out, 0, t);
   return out;
 }

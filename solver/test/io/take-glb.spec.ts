@@ -2,8 +2,7 @@
 // implementation) with the same morph targets, weights and skinned vertices, and carrying what
 // live tuning needs.
 import { readFileSync } from 'node:fs';
-import { AnimationMixer, SkinnedMesh, Vector3 } from 'three';
-import { GLTFLoader, type GLTF } from 'three/examples/jsm/loaders/GLTFLoader.js';
+import { SkinnedMesh } from 'three';
 import { describe, expect, it } from 'vitest';
 import {
   clipFramePose,
@@ -27,17 +26,10 @@ import { landingMotion, sampledClip } from '../helpers/known-clips.js';
 import { knownProfile } from '../helpers/known-profile.js';
 import { validatorErrors } from '../helpers/validator.js';
 import { fixture } from '../retarget/fixtures.js';
+import { maxDiff, parseGlb as parse, threeFrame } from './take-three.js';
 
 const { character, profile } = fixture();
 const clip = sampledClip(character, 30, 2, landingMotion(0.3));
-
-function parse(bytes: Uint8Array): Promise<GLTF> {
-  const buffer = bytes.buffer.slice(
-    bytes.byteOffset,
-    bytes.byteOffset + bytes.byteLength,
-  ) as ArrayBuffer;
-  return new Promise((resolve, reject) => new GLTFLoader().parse(buffer, '', resolve, reject));
-}
 
 /** Our skinned positions of frame f: LBS(rest + Σ_k w_k · basis_k). */
 function ourFrame(take: Take, c: Character, shot: Clip, f: number): Float32Array {
@@ -66,32 +58,6 @@ function ourFrame(take: Take, c: Character, shot: Clip, f: number): Float32Array
     new Float32Array(n3),
   ) as Float32Array;
 }
-
-/** three.js's skinned positions at time t (morph targets, then skinning). */
-function threeFrame(gltf: GLTF, t: number): Float32Array {
-  let mesh: SkinnedMesh | null = null;
-  gltf.scene.traverse((o) => {
-    if ((o as SkinnedMesh).isSkinnedMesh) mesh = o as SkinnedMesh;
-  });
-  const m = mesh as unknown as SkinnedMesh;
-  const mixer = new AnimationMixer(gltf.scene);
-  mixer.clipAction(gltf.animations[0]).play();
-  mixer.setTime(t);
-  gltf.scene.updateMatrixWorld(true);
-  m.skeleton.update();
-  const count = m.geometry.getAttribute('position').count;
-  const out = new Float32Array(3 * count);
-  const v = new Vector3();
-  for (let i = 0; i < count; i++) {
-    m.getVertexPosition(i, v);
-    v.applyMatrix4(m.matrixWorld);
-    out.set([v.x, v.y, v.z], 3 * i);
-  }
-  return out;
-}
-
-const maxDiff = (a: Float32Array, b: Float32Array) =>
-  a.reduce((m, x, i) => Math.max(m, Math.abs(x - b[i])), 0);
 
 describe('take .glb', () => {
   it('passes the Khronos validator and three.js plays its morph targets and weights', async () => {

@@ -5,10 +5,11 @@ import {
   companionEigen,
   learnProfile,
   spectralRadius,
+  unpose,
   writeProfile,
   type Capture,
 } from '../../src/index.js';
-import { tissueCapture } from '../helpers/tissue-capture.js';
+import { TISSUE_MODE, tissueCapture } from '../helpers/tissue-capture.js';
 
 const data = tissueCapture(4, 60);
 const options = { maxModes: 8 };
@@ -19,6 +20,18 @@ describe('learnProfile on a noise-free synthetic capture', () => {
     const again = learnProfile(data.character, data.capture, options);
     expect(writeProfile(again.profile)).toEqual(writeProfile(first.profile));
     expect(again.profile.id).toBe(first.profile.id);
+  });
+
+  it('gives back the mode within 0.5 % and leaves the tissue motion out of the correctives', () => {
+    // Noise-free synthetic data must give back its modes within 0.5 % (solver.md, Dynamics).
+    const modes = first.profile.modes.filter((m) => m.energyShare > 0.01);
+    expect(modes).toHaveLength(1);
+    expect(Math.abs(modes[0].frequencyHz / TISSUE_MODE.frequencyHz - 1)).toBeLessThan(0.005);
+    expect(Math.abs(modes[0].dampingRatio / TISSUE_MODE.dampingRatio - 1)).toBeLessThan(0.005);
+    // The capture has no correctives: the pose-driven part should be empty.
+    const { residuals } = unpose(data.character, data.capture, data.clip);
+    const energy = (a: Float32Array): number => a.reduce((s, v) => s + v * v, 0);
+    expect(energy(first.poseDisplacement)).toBeLessThan(1e-6 * energy(residuals));
   });
 
   it('keeps the dynamic basis orthonormal and orthogonal to the corrective span', () => {

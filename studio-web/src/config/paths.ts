@@ -8,8 +8,9 @@ export const paths = {
     getHref: (redirectTo?: string) =>
       `/sign-in${redirectTo ? `?redirectTo=${encodeURIComponent(redirectTo)}` : ''}`,
   },
-  acceptInvitation: { path: '/invitations/accept', getHref: () => '/invitations/accept' },
-  resetPassword: { path: '/password-reset', getHref: () => '/password-reset' },
+  // These two match the links the API e-mails (their token travels in the URL fragment).
+  acceptInvitation: { path: '/accept-invitation', getHref: () => '/accept-invitation' },
+  resetPassword: { path: '/reset-password', getHref: () => '/reset-password' },
   status: { path: '/status', getHref: () => '/status' },
   shows: { path: '/shows', getHref: () => '/shows' },
   show: {
@@ -67,6 +68,7 @@ export const paths = {
   },
   admin: { path: '/admin', getHref: () => '/admin' },
   adminUsers: { path: '/admin/users', getHref: () => '/admin/users' },
+  adminInvitations: { path: '/admin/invitations', getHref: () => '/admin/invitations' },
   adminShows: { path: '/admin/shows', getHref: () => '/admin/shows' },
   adminShow: {
     path: '/admin/shows/:showId',

@@ -16,6 +16,8 @@ export interface ApiRequestOptions {
   signal?: AbortSignal;
   /** Non-2xx statuses whose body is still a valid answer, e.g. 503 from the health check. */
   acceptStatus?: readonly number[];
+  /** What the caller wants back (default JSON); a download asks for its own type. */
+  accept?: string;
 }
 
 /** Checks an answer's shape and returns it typed; throws an Error saying what is missing. */
@@ -62,13 +64,13 @@ function unreachable(status: number, cause: string): ApiError {
 }
 
 async function send(url: string, options: ApiRequestOptions): Promise<Response> {
-  const { method = 'GET', body, signal } = options;
+  const { method = 'GET', body, signal, accept = 'application/json' } = options;
   try {
     return await fetch(url, {
       method,
       signal,
       headers: {
-        Accept: 'application/json',
+        Accept: accept,
         ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
       },
       body: body === undefined ? undefined : JSON.stringify(body),
@@ -108,6 +110,49 @@ export async function apiRequest<T = unknown>(
     message: body.ok
       ? `The API answered ${request} with HTTP ${status} but no error description.`
       : `The API answered ${request} with something that is not JSON (HTTP ${status}).`,
+  });
+}
+
+/** A file the API sent, with the name it suggested. */
+export interface ApiFile {
+  blob: Blob;
+  /** From Content-Disposition's filename, if the API gave one. */
+  filename: string | undefined;
+}
+
+function dispositionFilename(header: string | null): string | undefined {
+  const match = /filename="?([^";]+)"?/i.exec(header ?? '');
+  return match ? match[1] : undefined;
+}
+
+/** Downloads a file from the API at `path`; failures raise the same ApiError as apiRequest. */
+export async function apiDownload(path: string, options: ApiRequestOptions = {}): Promise<ApiFile> {
+  const response = await send(`${env.apiBaseUrl}${path}`, {
+    ...options,
+    accept: options.accept ?? '*/*',
+  });
+  if (response.ok) {
+    try {
+      const blob = await response.blob();
+      return { blob, filename: dispositionFilename(response.headers.get('Content-Disposition')) };
+    } catch (error) {
+      // The API cuts a download short when it fails half-way: say so rather than save half.
+      if (options.signal?.aborted) throw error;
+      throw unreachable(response.status, error instanceof Error ? error.message : String(error));
+    }
+  }
+  const body = await readJson(response, options.signal);
+  if (body.ok && isErrorBody(body.value)) {
+    const { code, message, details } = body.value;
+    throw new ApiError({ status: response.status, code, message, details });
+  }
+  if (GATEWAY_STATUSES.has(response.status)) {
+    throw unreachable(response.status, `HTTP ${response.status} without an API body`);
+  }
+  throw new ApiError({
+    status: response.status,
+    code: UNEXPECTED_RESPONSE,
+    message: `The API answered GET ${path} with HTTP ${response.status} but no error description.`,
   });
 }
 

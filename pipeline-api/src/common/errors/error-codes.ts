@@ -62,7 +62,11 @@ export const ERROR_CODES = {
     description:
       'A capture upload needs the consent record: performer code, scope and expiry date.',
   },
-  CONSENT_EXPIRED: { status: 400, description: "The consent record's expiry date has passed." },
+  CONSENT_EXPIRED: {
+    status: 400,
+    description:
+      "The consent record's expiry date has passed (at upload, or a capture no longer usable for learning).",
+  },
   UPLOAD_NOT_OPEN: {
     status: 409,
     description: 'The upload is not waiting for parts (completed, aborted or never started).',
@@ -92,13 +96,13 @@ export const ERROR_CODES = {
     status: 409,
     description: 'The capture was deleted; only its record remains.',
   },
-  CAPTURE_CONSENT_EXPIRED: {
-    status: 409,
-    description: "The capture's consent has expired: no new learning from it.",
-  },
   CLIP_NOT_FOUND: { status: 404, description: 'No such clip in this show.' },
   CLIP_NOT_READY: { status: 409, description: 'The clip has not passed its check yet.' },
   PROFILE_NOT_FOUND: { status: 404, description: 'No such tissue profile in this show.' },
+  PROFILE_NOT_READY: {
+    status: 409,
+    description: 'The tissue profile has not finished learning (or its learning failed).',
+  },
   // Shots and tracking.
   SHOT_NOT_FOUND: { status: 404, description: 'No such shot in this show.' },
   SHOT_CODE_TAKEN: { status: 409, description: 'Another shot of the show has this code.' },
@@ -117,7 +121,32 @@ export const ERROR_CODES = {
   },
   JOB_STATE_INVALID_TRANSITION: {
     status: 409,
-    description: 'The retarget job cannot move that way.',
+    description: 'The job cannot move that way.',
+  },
+  // Learn and retarget jobs.
+  JOB_NOT_FOUND: { status: 404, description: 'No such learn or retarget job in this show.' },
+  INVALID_STATE_CHANGE: {
+    status: 409,
+    description: 'The job has finished (solved, failed or canceled); it can no longer be canceled.',
+  },
+  JOB_NOT_SUBMITTER: {
+    status: 403,
+    description: 'Only admins, technical artists and the person who submitted a job may cancel it.',
+  },
+  JOBS_UNAVAILABLE: { status: 503, description: 'The job queue cannot be reached; try again.' },
+  SHOT_NOT_READY: {
+    status: 409,
+    description: 'The shot has no target character or no clip yet; set both before solving.',
+  },
+  UNMAPPED_DRIVERS: {
+    status: 400,
+    description:
+      "Driver joints of the profile that carry much of its input have no joint on the shot's character; `details.drivers` lists them: map them in `jointMap`.",
+  },
+  CLIP_TOO_SHORT: {
+    status: 400,
+    description:
+      "The shot's frame range lasts less than the pre-roll; `details` gives both durations.",
   },
   // Takes and review.
   TAKE_NOT_FOUND: { status: 404, description: 'No such take in this show.' },

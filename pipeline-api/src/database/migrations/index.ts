@@ -5,6 +5,7 @@ import { Migration20261202000000_accounts } from './Migration20261202000000_acco
 import { Migration20261203000000_library } from './Migration20261203000000_library';
 import { Migration20261204000000_production } from './Migration20261204000000_production';
 import { Migration20261205000000_shot_list_indexes } from './Migration20261205000000_shot_list_indexes';
+import { Migration20261215000000_solver_jobs } from './Migration20261215000000_solver_jobs';
 
 /** Every migration, oldest first. */
 export const MIGRATIONS = [
@@ -16,4 +17,5 @@ export const MIGRATIONS = [
     name: 'Migration20261205000000_shot_list_indexes',
     class: Migration20261205000000_shot_list_indexes,
   },
+  { name: 'Migration20261215000000_solver_jobs', class: Migration20261215000000_solver_jobs },
 ];

@@ -4,12 +4,15 @@ import { Show } from '../../shows/entities/show.entity';
 import { User } from '../../users/entities/user.entity';
 import { Shot } from '../../shots/entities/shot.entity';
 import { TissueProfile } from '../../library/entities/tissue-profile.entity';
-import { assertJobTransition, JobState } from '../job-state';
+import { Take } from '../../takes/entities/take.entity';
+import { JobState } from '../job-state';
+import { applyJobMove, type JobRecord, type MoveInfo } from '../job-move';
 
 /** One solver run for a shot with a profile and the artist's controls. */
 @Entity({ tableName: 'retarget_jobs' })
 @Index({ properties: ['show', 'state'] })
-export class RetargetJob {
+@Index({ properties: ['show', 'createdAt'] })
+export class RetargetJob implements JobRecord {
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
 
@@ -22,8 +25,17 @@ export class RetargetJob {
   @ManyToOne(() => TissueProfile)
   profile: TissueProfile;
 
+  /** The controls the solve uses, every field filled (solver defaults for those not given). */
   @Property({ type: 'json' })
   controls: Record<string, unknown>;
+
+  /** Source → target joint names that override name matching. */
+  @Property({ type: 'json', nullable: true })
+  jointMap?: Record<string, string> | null;
+
+  /** The take whose tuned controls this job re-solves ("save as new take"). */
+  @ManyToOne(() => Take, { nullable: true })
+  baseTake?: Take | null;
 
   @Enum({ items: () => JobState })
   state: JobState = JobState.Queued;
@@ -47,7 +59,7 @@ export class RetargetJob {
   @ManyToOne(() => User, { nullable: true })
   submittedBy?: User | null;
 
-  /** Host and process that last ran it. */
+  /** Host, process and attempt that last ran it. */
   @Property({ type: 'string', length: 120, nullable: true })
   worker?: string | null;
 
@@ -74,24 +86,12 @@ export class RetargetJob {
     shot.solveState = this.state;
   }
 
-  /** Moves the job (and the shot's solve state) along the state machine; throws on a bad move. */
-  moveTo(to: JobState, info: { worker?: string; errorCode?: string; message?: string } = {}) {
-    assertJobTransition(this.state, to);
-    const now = new Date();
-    this.state = to;
-    if (to === JobState.Solving) {
-      this.attempts += 1;
-      this.startedAt = now;
-      this.worker = info.worker ?? this.worker;
-    }
-    if (to === JobState.Solved || to === JobState.Failed || to === JobState.Canceled) {
-      this.finishedAt = now;
-      this.percent = to === JobState.Solved ? 100 : this.percent;
-    }
-    if (to === JobState.Failed) {
-      this.errorCode = info.errorCode ?? 'SOLVE_FAILED';
-      this.errorMessage = info.message ?? null;
-    }
-    this.shot.solveState = to;
+  /**
+   * Moves the job along its state machine (throws on a bad move) and, unless a newer job of the
+   * shot exists (`latest: false`), the shot's solve state with it.
+   */
+  moveTo(to: JobState, info: MoveInfo & { latest?: boolean } = {}) {
+    applyJobMove(this, to, info);
+    if (info.latest !== false) this.shot.solveState = to;
   }
 }

@@ -12,6 +12,29 @@ export enum ProfileState {
   Failed = 'failed',
 }
 
+/** One learned mode as the library shows it. */
+export interface ProfileMode {
+  frequencyHz: number;
+  dampingRatio: number;
+  region: string;
+  energyShare: number;
+  flags?: string[];
+}
+
+/** One region's power spectrum of dynamic displacement, with its peaks. */
+export interface ProfileSpectrum {
+  region: string;
+  frequencyHz: number[];
+  power: number[];
+  peaks: { frequencyHz: number; power: number }[];
+}
+
+/** A joint whose motion drives the profile, and its share of the input energy. */
+export interface ProfileDriver {
+  joint: string;
+  energyShare: number;
+}
+
 /** What the solver learned from one capture on one character (filled by the learn job). */
 @Entity({ tableName: 'tissue_profiles' })
 @Index({ properties: ['show', 'state'] })
@@ -36,10 +59,22 @@ export class TissueProfile {
 
   /** The profile's modes (frequency, damping ratio, region, share of energy). */
   @Property({ type: 'json', nullable: true })
-  modes?: unknown[] | null;
+  modes?: ProfileMode[] | null;
 
   @Property({ type: 'json', nullable: true })
   fitReport?: Record<string, unknown> | null;
+
+  /** Per region spectra of the dynamic displacement, with peaks. */
+  @Property({ type: 'json', nullable: true })
+  spectra?: ProfileSpectrum[] | null;
+
+  /** Driver joints with their share of the input (for joint maps before a retarget). */
+  @Property({ type: 'json', nullable: true })
+  drivers?: ProfileDriver[] | null;
+
+  /** Joint names of the character it was learned on (what a joint map may name). */
+  @Property({ type: 'json', nullable: true })
+  sourceJoints?: string[] | null;
 
   /** Object keys of the profile's files in the bucket. */
   @Property({ type: 'json', nullable: true })

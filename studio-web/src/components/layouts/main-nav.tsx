@@ -1,24 +1,24 @@
 import { TabNav } from '@radix-ui/themes';
 import { Link, useMatch } from 'react-router-dom';
-import { paths } from '@/config/paths';
+import type { NavItem } from './nav-items';
 
-const NAV_ITEMS = [{ label: 'Status', path: paths.status.path, href: paths.status.getHref() }];
-
-function NavItem({ label, path, href }: (typeof NAV_ITEMS)[number]) {
-  const match = useMatch({ path, end: false });
+function NavLink({ item }: { item: NavItem }) {
+  const match = useMatch({ path: item.match, end: false });
   return (
     <TabNav.Link asChild active={match !== null}>
-      <Link to={href}>{label}</Link>
+      <Link to={item.href} data-nav={item.key}>
+        {item.label}
+      </Link>
     </TabNav.Link>
   );
 }
 
-/** The studio's main navigation. */
-export function MainNav() {
+/** The studio's main navigation: only the places the user's role can use. */
+export function MainNav({ items }: { items: NavItem[] }) {
   return (
     <TabNav.Root aria-label="Main" size="2">
-      {NAV_ITEMS.map((item) => (
-        <NavItem key={item.href} {...item} />
+      {items.map((item) => (
+        <NavLink key={item.key} item={item} />
       ))}
     </TabNav.Root>
   );

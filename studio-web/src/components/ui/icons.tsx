@@ -83,3 +83,52 @@ export function UnknownIcon(props: IconProps) {
     </Icon>
   );
 }
+
+/** A circle with a slash: stopped on purpose (canceled). */
+export function StopIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <circle cx="8" cy="8" r="6.25" />
+      <path d="M3.6 12.4 12.4 3.6" />
+    </Icon>
+  );
+}
+
+/** A dashed circle: nothing has happened yet. */
+export function EmptyIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <circle cx="8" cy="8" r="6.25" strokeDasharray="2.5 2.5" />
+    </Icon>
+  );
+}
+
+/** An open eye: waiting for someone to look. */
+export function EyeIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M1.5 8s2.5-4.5 6.5-4.5S14.5 8 14.5 8 12 12.5 8 12.5 1.5 8 1.5 8Z" />
+      <circle cx="8" cy="8" r="1.75" />
+    </Icon>
+  );
+}
+
+/** An arrow turning back: sent back for changes. */
+export function ReturnIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M6 3.5 2.5 7 6 10.5" />
+      <path d="M2.5 7h7a4 4 0 0 1 0 8h-1" />
+    </Icon>
+  );
+}
+
+/** A stopwatch with a bang: a date that has passed. */
+export function LateIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <circle cx="8" cy="8.5" r="5.75" />
+      <path d="M8 5.5v3.25M8 11v.25M6 1.5h4" />
+    </Icon>
+  );
+}

@@ -1,0 +1,210 @@
+import { Flex, Grid, Text } from '@radix-ui/themes';
+import { useCallback, useReducer, useRef, useState } from 'react';
+import { usePermissions, useSession } from '@/features/auth';
+import { useShotTakes } from '../api/get-shot-takes';
+import { useNotes } from '../api/get-notes';
+import { useTakeFile } from '../api/get-take-file';
+import type { TakeShot } from '../api/get-shot';
+import type { MarkPoint, Note } from '../api/note-view';
+import type { Take } from '../api/take-view';
+import { useLiveTuning } from '../hooks/use-live-tuning';
+import { usePlaybackClock } from '../hooks/use-playback-clock';
+import { usePlayerShortcuts } from '../hooks/use-player-shortcuts';
+import { useTakeModel } from '../hooks/use-take-model';
+import { useUrlFrame } from '../hooks/use-url-frame';
+import type { TakeModel } from '../player/take-model';
+import type { TakeViewer } from '../player/take-viewer';
+import { frameIndexOf, marksAtFrame } from '../review/note-frames';
+import type { PlayerCommand } from '../transport/shortcuts';
+import { initialTransport, transportReducer } from '../transport/transport-state';
+import { ControlsPanel } from './controls-panel';
+import { ControlsSummary } from './controls-summary';
+import { HeatMapLegend } from './heat-map-legend';
+import { MarkLayer } from './mark-layer';
+import { ReviewPanel } from './review-panel';
+import { ShortcutList } from './shortcut-list';
+import { TakeViewport } from './take-viewport';
+import { TransportBar } from './transport-bar';
+import { modeLabel, ViewOptions, type ViewSettings } from './view-options';
+
+/** Props of the player. */
+export interface TakePlayerProps {
+  showId: string;
+  take: Take;
+  shot: TakeShot;
+  model: TakeModel;
+}
+
+const STEP_COMMANDS: Partial<Record<PlayerCommand, number>> = {
+  stepBack: -1,
+  stepForward: 1,
+  stepBack10: -10,
+  stepForward10: 10,
+};
+
+/** The take player: viewport, transport, compare and heat map, controls, and review. */
+export function TakePlayer({ showId, take, shot, model }: TakePlayerProps) {
+  const { user, role } = useSession();
+  const { can } = usePermissions();
+  const [transport, dispatch] = useReducer(transportReducer, undefined, () =>
+    initialTransport(model.frameCount, shot.fps),
+  );
+  const tuning = useLiveTuning(model);
+  const [view, setView] = useState<ViewSettings>({
+    compare: 'none',
+    otherTakeId: null,
+    layout: 'side-by-side',
+    heatMap: false,
+    follow: true,
+  });
+  const changeView = useCallback(
+    (patch: Partial<ViewSettings>) => setView((v) => ({ ...v, ...patch })),
+    [],
+  );
+  const shotTakes = useShotTakes(showId, take.shotId);
+  const otherTakeId = view.compare === 'take' ? (view.otherTakeId ?? undefined) : undefined;
+  const otherFile = useTakeFile(showId, otherTakeId);
+  const otherModel = useTakeModel(otherTakeId, otherFile.data);
+  const [heatScaleMm, setHeatScaleMm] = useState(0);
+  const viewer = useRef<TakeViewer | null>(null);
+  const onViewer = useCallback((v: TakeViewer | null) => {
+    viewer.current = v;
+  }, []);
+  const [drawing, setDrawing] = useState(false);
+  const [draft, setDraft] = useState<MarkPoint[][]>([]);
+  const [activeNoteId, setActiveNoteId] = useState<string | null>(null);
+  const notes = useNotes(showId, take.id);
+
+  const frameCharacter = useCallback(() => {
+    viewer.current?.frameCharacter();
+  }, []);
+
+  usePlaybackClock(transport.playing, dispatch);
+  useUrlFrame(transport, shot.frameStart, dispatch);
+  usePlayerShortcuts((command) => {
+    const by = STEP_COMMANDS[command];
+    if (by !== undefined) return dispatch({ type: 'step', by });
+    if (command === 'togglePlay') dispatch({ type: 'toggle' });
+    else if (command === 'setIn') dispatch({ type: 'setIn' });
+    else if (command === 'setOut') dispatch({ type: 'setOut' });
+    else if (command === 'clearRange') dispatch({ type: 'clearRange' });
+    else if (command === 'toRangeStart') dispatch({ type: 'toRangeStart' });
+    else if (command === 'toRangeEnd') dispatch({ type: 'toRangeEnd' });
+    else if (command === 'toggleLoop') dispatch({ type: 'setLoop', loop: !transport.loop });
+    else if (command === 'toggleHeatMap') changeView({ heatMap: !view.heatMap });
+    else if (command === 'frameCharacter') frameCharacter();
+  });
+
+  const onJump = useCallback(
+    (note: Note) => {
+      setActiveNoteId(note.id);
+      dispatch({ type: 'pause' });
+      dispatch({
+        type: 'seek',
+        frame: frameIndexOf(note.frame, shot.frameStart, model.frameCount),
+      });
+    },
+    [shot.frameStart, model.frameCount],
+  );
+
+  const shotFrame = shot.frameStart + transport.frame;
+  const marks = marksAtFrame(notes.data ?? [], shotFrame);
+  const others = (shotTakes.data ?? []).filter((t) => t.id !== take.id);
+  const otherTake = others.find((t) => t.id === otherTakeId);
+  const comparing = view.compare === 'skinning' || (view.compare === 'take' && otherModel.data);
+  const sideLabels: [string, string] | null = comparing
+    ? [
+        view.compare === 'skinning' ? 'Skinning only' : `Take v${otherTake?.version ?? '?'}`,
+        `Take v${take.version}${tuning.changed ? ' (tuned)' : ''}`,
+      ]
+    : null;
+  const modes = model.take.extras.modes;
+  const soloNote =
+    tuning.solo === null ? null : `Solo: ${modeLabel(modes[tuning.solo], tuning.solo)}`;
+
+  return (
+    <Flex direction="column" gap="4" data-testid="take-player" data-take-version={take.version}>
+      <TakeViewport
+        model={model}
+        basis={tuning.basis}
+        version={tuning.version}
+        frame={transport.frame}
+        compare={comparing ? view.compare : 'none'}
+        otherModel={view.compare === 'take' ? (otherModel.data ?? null) : null}
+        layout={view.layout}
+        heatMap={view.heatMap}
+        follow={view.follow}
+        sideLabels={sideLabels}
+        onHeatScale={setHeatScaleMm}
+        onViewer={onViewer}
+      >
+        <MarkLayer
+          notes={marks}
+          activeNoteId={activeNoteId}
+          drawing={drawing}
+          draft={draft}
+          onDraftChange={setDraft}
+        />
+        {view.heatMap && heatScaleMm > 0 ? (
+          <div className="take-viewport-legend">
+            <HeatMapLegend scaleMm={heatScaleMm} note={soloNote} />
+          </div>
+        ) : null}
+      </TakeViewport>
+      {comparing && view.layout === 'overlay' ? (
+        <Text size="1" color="gray">
+          Overlaid: {sideLabels?.[0]} drawn as an amber wireframe over take v{take.version}.
+        </Text>
+      ) : null}
+      {view.compare === 'take' && otherModel.isError ? (
+        <Text size="2" color="red">
+          The other take cannot be shown: {String(otherModel.error)}
+        </Text>
+      ) : null}
+      <TransportBar
+        state={transport}
+        frameStart={shot.frameStart}
+        shotFps={shot.fps}
+        dispatch={dispatch}
+      />
+      <ViewOptions
+        settings={view}
+        onChange={changeView}
+        otherTakes={others}
+        modes={modes}
+        solo={tuning.solo}
+        onSolo={tuning.setSolo}
+        onFrameCharacter={frameCharacter}
+      />
+      <Grid columns={{ initial: '1', md: '2' }} gap="4" align="start">
+        {can('tuneTake') ? (
+          <ControlsPanel
+            showId={showId}
+            take={take}
+            model={model}
+            tuning={tuning}
+            canSave={can('saveTake')}
+          />
+        ) : (
+          <ControlsSummary model={model} solo={tuning.solo} />
+        )}
+        <ReviewPanel
+          showId={showId}
+          take={take}
+          shotFrame={shotFrame}
+          userId={user.id}
+          isAdmin={role === 'admin'}
+          canWrite={can('writeNote')}
+          canResolve={can('resolveNote')}
+          canDecide={can('decide')}
+          drawing={drawing}
+          onDrawingChange={setDrawing}
+          draft={draft}
+          onDraftChange={setDraft}
+          onJump={onJump}
+        />
+      </Grid>
+      <ShortcutList />
+    </Flex>
+  );
+}
