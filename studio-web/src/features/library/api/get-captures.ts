@@ -3,7 +3,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import { LIBRARY_POLL_MS, libraryKeys, showPath } from './library-keys';
 import { parseCapture, type Capture } from './library-types';
-import { asArray } from './parse';
+import { asArray } from '@/lib/parse-answer';
 
 /** Fetches the show's captures (not the deleted ones). */
 export function getCaptures(showId: string, { signal }: { signal?: AbortSignal } = {}) {

@@ -3,7 +3,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import { LIBRARY_POLL_MS, libraryKeys, showPath } from './library-keys';
 import { parseCharacter, type Character } from './library-types';
-import { asArray } from './parse';
+import { asArray } from '@/lib/parse-answer';
 
 /** Fetches the show's characters, refused uploads included (they carry their report). */
 export function getCharacters(showId: string, { signal }: { signal?: AbortSignal } = {}) {

@@ -3,7 +3,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import { LIBRARY_POLL_MS, libraryKeys, showPath } from './library-keys';
 import { parseProfile, type Profile } from './profile-types';
-import { asArray } from './parse';
+import { asArray } from '@/lib/parse-answer';
 
 /** Fetches the show's profiles. */
 export function getProfiles(showId: string, { signal }: { signal?: AbortSignal } = {}) {

@@ -1,5 +1,5 @@
 // Shape of a solver job (learn or retarget) and its check; profiles and shots both show jobs.
-import { asObject, num, oneOf, optNum, optStr, str, type Json } from './parse';
+import { asObject, num, oneOf, optNum, optStr, str, type Json } from '@/lib/parse-answer';
 
 /** Where a job is: `queued → solving → solved | failed | canceled`. */
 export type JobState = 'queued' | 'solving' | 'solved' | 'failed' | 'canceled';

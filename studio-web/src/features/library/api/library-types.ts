@@ -1,5 +1,14 @@
 // Shapes of the library's answers (characters, captures, clips, uploaded files) and their checks.
-import { asObject, num, oneOf, optNum, optStr, optStrings, str, type Json } from './parse';
+import {
+  asObject,
+  num,
+  oneOf,
+  optNum,
+  optStr,
+  optStrings,
+  str,
+  type Json,
+} from '@/lib/parse-answer';
 
 /** What an uploaded file holds. */
 export type AssetKind = 'character' | 'capture' | 'clip';

@@ -1,6 +1,6 @@
 // Shape of a tissue profile: its modes, spectra, fit report and learn job, and their check.
 import { parseJob, type Job } from './job-view';
-import { asArray, asObject, num, oneOf, optNum, optStr, str, type Json } from './parse';
+import { asArray, asObject, num, oneOf, optNum, optStr, str, type Json } from '@/lib/parse-answer';
 
 /** Where a profile is: waiting to learn, learning, usable, or failed. */
 export type ProfileState = 'queued' | 'learning' | 'ready' | 'failed';

@@ -1,7 +1,7 @@
 // POST /api/shows/:showId/uploads/:assetId/parts: fresh URLs for some parts (retry, resume).
 import { apiRequest } from '@/lib/api-client';
 import { showPath } from './library-keys';
-import { asObject } from './parse';
+import { asObject } from '@/lib/parse-answer';
 import { parsePartUrls, type PartUrl } from './upload-types';
 
 /** Presigns the given parts of an open upload again. */

@@ -1,6 +1,6 @@
 // Shapes of the upload answers (open upload, fresh part URLs) and their checks.
 import { parseAsset, type Asset, type AssetKind } from './library-types';
-import { asArray, asObject, num, str } from './parse';
+import { asArray, asObject, num, str } from '@/lib/parse-answer';
 
 /** Where to PUT one part of a file. */
 export interface PartUrl {

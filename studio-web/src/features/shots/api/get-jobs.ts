@@ -3,7 +3,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import { isJobFinished, parseJob, type Job } from '@/features/library/api/job-view';
 import { showPath } from '@/features/library/api/library-keys';
-import { asArray, asObject } from '@/features/library/api/parse';
+import { asArray, asObject } from '@/lib/parse-answer';
 import { JOB_POLL_MS, shotKeys } from './shot-keys';
 
 /** Fetches a shot's jobs. */

@@ -3,7 +3,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import { showPath } from '@/features/library/api/library-keys';
-import { asArray, asObject, str } from '@/features/library/api/parse';
+import { asArray, asObject, str } from '@/lib/parse-answer';
 import { shotKeys } from './shot-keys';
 
 /** The joint map: pairs found, and the profile's joints without a partner. */

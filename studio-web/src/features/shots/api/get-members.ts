@@ -2,7 +2,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import { showPath } from '@/features/library/api/library-keys';
-import { asArray } from '@/features/library/api/parse';
+import { asArray } from '@/lib/parse-answer';
 import { parseMember } from './shot-types';
 import { shotKeys } from './shot-keys';
 

@@ -1,15 +1,6 @@
 // Shapes of the shot answers (shot, page of shots, take, member) and their checks.
 import { JOB_STATES, type JobState } from '@/features/library/api/job-view';
-import {
-  asArray,
-  asObject,
-  num,
-  oneOf,
-  optNum,
-  optStr,
-  str,
-  type Json,
-} from '@/features/library/api/parse';
+import { asArray, asObject, num, oneOf, optNum, optStr, str, type Json } from '@/lib/parse-answer';
 import {
   RENDER_STATES,
   REVIEW_STATES,

@@ -3,7 +3,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import { getJobQueryOptions } from './get-job';
-import { parseJob, type RetargetJob } from './job-view';
+import { parseJob, type Job as RetargetJob } from '@/features/library/api/job-view';
 import { showPath } from './take-keys';
 
 /** What the job is asked to do. */

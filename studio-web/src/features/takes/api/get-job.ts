@@ -1,7 +1,7 @@
 // GET /api/shows/:showId/jobs/:jobId: a job's state and progress, polled while it runs.
 import { queryOptions, useQuery, type Query } from '@tanstack/react-query';
 import { ApiError, apiRequest } from '@/lib/api-client';
-import { isJobFinished, parseJob, type RetargetJob } from './job-view';
+import { isJobFinished, parseJob, type Job as RetargetJob } from '@/features/library/api/job-view';
 import { showPath, takeKeys } from './take-keys';
 
 /** How often a running job is asked again, in milliseconds. */

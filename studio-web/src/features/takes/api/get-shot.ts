@@ -1,7 +1,7 @@
 // GET /api/shows/:showId/shots/:shotId: the take's shot, for its code, frame range and rate.
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
-import { asObject, num, str } from './parse';
+import { asObject, num, str } from '@/lib/parse-answer';
 import { showPath, takeKeys } from './take-keys';
 
 /** What the take player needs of a shot. */

@@ -1,5 +1,5 @@
 // Shapes of review notes and decisions as the API shows them, and their checks.
-import { asList, asObject, num, oneOf, optStr, person, str, type Json } from './parse';
+import { asArray, asObject, num, oneOf, optStr, person, str, type Json } from '@/lib/parse-answer';
 
 /** A point of a drawn mark: [x, y] in normalised view coordinates (0–1, y down). */
 export type MarkPoint = [number, number];
@@ -64,7 +64,7 @@ export function parseNote(value: unknown): Note {
 
 /** Checks a list of notes. */
 export function parseNotes(value: unknown): Note[] {
-  return asList(value, 'notes').map(parseNote);
+  return asArray(value, 'notes').map(parseNote);
 }
 
 /** What a supervisor decided about a take. */
@@ -96,5 +96,5 @@ export function parseDecision(value: unknown): ReviewDecision {
 
 /** Checks a list of decisions. */
 export function parseDecisions(value: unknown): ReviewDecision[] {
-  return asList(value, 'decisions').map(parseDecision);
+  return asArray(value, 'decisions').map(parseDecision);
 }

@@ -1,5 +1,5 @@
 // Shape of a take as the API shows it, and its check.
-import { asList, asObject, num, oneOf, optStr, str } from './parse';
+import { asArray, asObject, num, oneOf, optStr, str } from '@/lib/parse-answer';
 
 /** Per take: `awaiting review → approved | changes requested`. */
 export type ReviewState = 'awaiting_review' | 'approved' | 'changes_requested';
@@ -62,5 +62,5 @@ export function parseTake(value: unknown): Take {
 
 /** Checks a list of takes. */
 export function parseTakes(value: unknown): Take[] {
-  return asList(value, 'takes').map(parseTake);
+  return asArray(value, 'takes').map(parseTake);
 }

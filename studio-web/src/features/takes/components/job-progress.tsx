@@ -5,7 +5,7 @@ import { ActivityIcon, CheckIcon, ClockIcon, CrossIcon } from '@/components/ui/i
 import { Mono } from '@/components/ui/mono';
 import { StateLabel } from '@/components/ui/state-label';
 import { paths } from '@/config/paths';
-import type { RetargetJob } from '../api/job-view';
+import type { Job as RetargetJob } from '@/features/library/api/job-view';
 import type { JobState } from '../api/take-view';
 import { useTake } from '../api/get-take';
 

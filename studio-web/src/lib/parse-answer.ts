@@ -67,3 +67,9 @@ export function oneOf<T extends string>(
   }
   return v as T;
 }
+
+/** `{ id, displayName }` of a person named in an answer. */
+export function person(value: unknown, key: string, what: string) {
+  const b = asObject(value, `${what} ${key}`);
+  return { id: str(b, 'id', what), displayName: optStr(b, 'displayName') ?? '' };
+}
