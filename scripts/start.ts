@@ -17,12 +17,14 @@ function signInLines(demo: DemoReport | null): string[] {
       ...(demo?.note ? [`  Demo show     not loaded: ${demo.note}`] : []),
     ];
   }
-  const width = Math.max(...demo.signIns.map((s) => s.email.length));
+  const email = Math.max(...demo.signIns.map((s) => s.email.length));
+  const password = Math.max(...demo.signIns.map((s) => s.password.length));
   return [
     '',
     `Demo sign-ins (${demo.passwordNotice ?? 'demo-only passwords'}):`,
     ...demo.signIns.map(
-      (s) => `  ${s.role.padEnd(17)} ${s.email.padEnd(width)}  ${s.password}  (demo only)`,
+      (s) =>
+        `  ${s.role.padEnd(17)} ${s.email.padEnd(email)}  ${s.password.padEnd(password)}  (demo only)`,
     ),
   ];
 }

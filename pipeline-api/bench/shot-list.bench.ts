@@ -1,14 +1,17 @@
 // Shot list latency under 50 concurrent clients on loopback: the first page in the default sort,
-// and a filtered, sorted query (one assignee's late shots by due date). Two loads: saturated
-// (each client sends its next request as soon as the last answers, so latency is mostly queueing:
-// 50 clients ÷ requests per second) and paced (each client one request per second, people
-// paging through the table). Beside latency, the CPU milliseconds the API and the database spend
-// per request (from /proc), and the machine's load average: on a shared machine latency measures
-// the other tenants too, CPU per request only our code. Prints figures only.
+// and a filtered, sorted query (one assignee's late shots by due date). Three loads: one client
+// alone (the latency of a request with no queue), saturated (each of 50 clients sends its next
+// request as soon as the last answers, so latency is mostly queueing: 50 clients ÷ requests per
+// second) and paced (each client one request per second, people paging through the table; the
+// clients start spread over the first second, see paced-clients.ts). Beside latency: the CPU
+// milliseconds the API and the database spend per request (from /proc), and the machine's load
+// average. On a shared machine latency measures the other tenants too; CPU per request measures
+// only our code. Prints figures only.
 import { loadavg } from 'node:os';
 import autocannon from 'autocannon';
 import { fmt, latencyFigures } from './stats';
 import { cpuMeter } from './server-cpu';
+import { runPaced } from './paced-clients';
 
 /** Concurrent clients, as the product's target states. */
 const CONNECTIONS = 50;
@@ -16,7 +19,12 @@ const CONNECTIONS = 50;
 const REQUESTS = 3000;
 /** Requests per paced run: ten seconds at one request per client per second. */
 const PACED_REQUESTS = 500;
+/** Requests of one client alone, one after another: the latency without any queueing. */
+const SINGLE_REQUESTS = 200;
 const WARM_UP = 300;
+
+/** How the clients send: one alone, all as fast as answered, or each once a second. */
+type Load = 'single' | 'saturated' | 'paced';
 
 /** One measured query. */
 export interface ShotListCase {
@@ -27,7 +35,7 @@ export interface ShotListCase {
 /** What a run measured. */
 export interface ShotListFigures {
   name: string;
-  load: 'saturated' | 'paced';
+  load: Load;
   p50: number;
   p95: number;
   p99: number;
@@ -54,7 +62,7 @@ function run(
   url: string,
   cookie: string,
   amount: number,
-  connectionRate?: number,
+  connections = CONNECTIONS,
 ): Promise<{ ms: number[]; rps: number; failures: number }> {
   const ms: number[] = [];
   let next = 0;
@@ -62,9 +70,8 @@ function run(
     const instance = autocannon(
       {
         url,
-        connections: CONNECTIONS,
+        connections,
         amount,
-        connectionRate,
         timeout: 10,
         headers: { cookie, accept: 'application/json' },
         setupClient: (client) => {
@@ -96,7 +103,7 @@ export async function runShotListBench(
   pids: ServerPids,
 ): Promise<ShotListFigures[]> {
   console.log(
-    `\nshot list: ${CONNECTIONS} concurrent clients; saturated ${REQUESTS} requests, paced ${PACED_REQUESTS} at 1/s per client`,
+    `\nshot list: one client alone (${SINGLE_REQUESTS} requests), then ${CONNECTIONS} concurrent clients: saturated ${REQUESTS} requests, paced ${PACED_REQUESTS} at 1/s per client`,
   );
   console.log(
     '  query                            load         p50 ms  p95 ms  p99 ms    req/s  failed  API ms/req  DB ms/req  loadavg',
@@ -108,12 +115,18 @@ export async function runShotListBench(
     if (probe.status !== 200)
       throw new Error(`${c.path} answered ${probe.status}: ${await probe.text()}`);
     await run(url, cookie, WARM_UP);
-    for (const load of ['saturated', 'paced'] as const) {
+    for (const load of ['single', 'saturated', 'paced'] as const) {
       const meter = cpuMeter({ api: pids.api, db: pids.db });
       const { ms, rps, failures } =
-        load === 'saturated'
-          ? await run(url, cookie, REQUESTS)
-          : await run(url, cookie, PACED_REQUESTS, 1);
+        load === 'single'
+          ? await run(url, cookie, SINGLE_REQUESTS, 1)
+          : load === 'saturated'
+            ? await run(url, cookie, REQUESTS)
+            : await runPaced(url, CONNECTIONS, PACED_REQUESTS / CONNECTIONS, (i) => ({
+                cookie,
+                accept: 'application/json',
+                'x-forwarded-for': `10.77.1.${i + 1}`,
+              }));
       const cpu = meter.since();
       const perRequest = (v: number | null) => (v === null ? null : v / ms.length);
       const f: ShotListFigures = {

@@ -106,6 +106,18 @@ describe('take review: supervisor', () => {
       .toBe(String(NOTE_FRAME));
     await page.waitForURL(new RegExp(`[?&]frame=${NOTE_FRAME}$`));
     await expect.poll(() => page.getByTestId('note-mark-stroke').count()).toBe(1);
+
+    // Space plays from here and pauses again; the mark leaves with its frame.
+    await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
+    await page.keyboard.press(' ');
+    await expect
+      .poll(() => page.getByTestId('frame-counter').textContent(), { timeout: 10_000 })
+      .not.toBe(String(NOTE_FRAME));
+    await page.keyboard.press(' ');
+    await expect
+      .poll(() => page.getByTestId('play-toggle').getAttribute('aria-pressed'))
+      .toBe('false');
+    await expect.poll(() => page.getByTestId('note-mark-stroke').count()).toBe(0);
   });
 
   it('approves the take after confirming, and the review state says so', async () => {

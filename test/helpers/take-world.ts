@@ -25,14 +25,6 @@ export interface TakeWorld {
   people: Record<TakeRole, { email: string; password: string; session: ApiSession }>;
 }
 
-/** How the world's take is made. */
-export interface TakeWorldOptions {
-  /** Learn options (K = 32 needs a high variance target on the noisy demo capture). */
-  learn?: { varianceTarget?: number; maxModes?: number };
-  /** Shot frames [first, last] of the 600-frame demo clip, at its 60 fps. */
-  frames?: [number, number];
-}
-
 async function invite(admin: ApiSession, showId: string, role: TakeRole) {
   const email = `${role.replace('_', '-')}.${uniq()}@example.test`;
   await admin.call('POST', '/admin/invitations', { email, role, showIds: [showId] });
@@ -103,7 +95,7 @@ export async function waitForTake(
 }
 
 /** Builds the world (about a minute: the worker learns a profile and solves a take). */
-export async function makeTakeWorld(options: TakeWorldOptions = {}): Promise<TakeWorld> {
+export async function makeTakeWorld(): Promise<TakeWorld> {
   const admin = await ApiSession.admin();
   const show = await admin.call<{ id: string }>('POST', '/admin/shows', {
     code: `TK${uniq()}`.toUpperCase().slice(0, 16),
@@ -147,7 +139,6 @@ export async function makeTakeWorld(options: TakeWorldOptions = {}): Promise<Tak
     name: 'Coach whistle and bounce (test)',
     captureId,
     characterId,
-    ...(options.learn ? { options: options.learn } : {}),
   });
   await pollUntil(
     `learning profile ${profile.id}`,
@@ -158,7 +149,8 @@ export async function makeTakeWorld(options: TakeWorldOptions = {}): Promise<Tak
   ).then((p) => {
     if (p.state !== 'ready') throw new Error(`learning failed: ${JSON.stringify(p)}`);
   });
-  const [frameStart, frameEnd] = options.frames ?? [0, 599];
+  // The whole 600-frame demo clip at its own 60 fps (shot frames are the clip's frames).
+  const [frameStart, frameEnd] = [0, 599];
   const shot = await ta.call<{ id: string }>('POST', `/shows/${show.id}/shots`, {
     sequence: 'SQ010',
     code: `SQ010_${uniq().toUpperCase()}`,

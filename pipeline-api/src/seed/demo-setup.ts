@@ -36,7 +36,7 @@ export async function runDemoSetup(
     const outcome = await seedDemo(orm, storage, { log });
     if (outcome.seeded) {
       const summary = Object.entries(outcome.counts)
-        .map(([what, n]) => `${n} ${what}`)
+        .map(([what, n]) => `${what} ${n}`)
         .join(', ');
       log(`demo show loaded in ${outcome.seconds.toFixed(0)} s: ${summary}`);
     } else {

@@ -11,7 +11,7 @@ import { Show } from '../shows/entities/show.entity';
 import { User } from '../users/entities/user.entity';
 import { Role } from '../users/entities/role';
 import { DEMO_FILES_DIR, DemoDataError, readDemoShow } from './demo-show-file';
-import type { SeedContext, SeedLog } from './seed-context';
+import { demoUser, type SeedContext, type SeedLog } from './seed-context';
 import { firstWithRole, roleOf, seedShow, seedUsers } from './seed-people';
 import { seedAssets } from './seed-assets';
 import { profileBytes, seedProfiles } from './seed-profile';
@@ -57,15 +57,16 @@ async function notEmpty(orm: MikroORM): Promise<string | null> {
   return `the database already holds ${users} user(s) and ${shows} show(s)`;
 }
 
-/** Deletes every object under a prefix; returns how many. */
+/** Deletes every object under a prefix (listed a thousand at a time); returns how many. */
 async function clearPrefix(storage: StorageService, prefix: string): Promise<number> {
   let removed = 0;
-  for (;;) {
+  for (let round = 0; round < 1000; round++) {
     const keys = await storage.list(prefix);
     if (keys.length === 0) return removed;
     for (const key of keys) await storage.delete(key);
     removed += keys.length;
   }
+  throw new Error(`the S3 store still lists files under ${prefix} after deleting them`);
 }
 
 /** Loads the demo show when the database is empty; otherwise does nothing and says why. */
@@ -100,7 +101,7 @@ export async function seedDemo(
   log(`loading the demo show ${demo.show.code} "${demo.show.name}"…`);
   await seedUsers(ctx);
   seedShow(ctx, showId);
-  const artist = ctx.users.get(firstWithRole(demo.users, Role.TechnicalArtist).email) as User;
+  const artist = demoUser(ctx, firstWithRole(demo.users, Role.TechnicalArtist).email, 'users');
   await seedAssets(ctx, artist);
   const profiles = await seedProfiles(ctx, artist);
   const [profile] = profiles.values();

@@ -1,6 +1,6 @@
 // The demo's tissue profile, really learned: the same solver thread a learn job runs in the worker
-// learns from the demo capture (about 20 s, progress printed), its file goes where a learn job
-// puts it, and the profile row gets the modes, fit report, spectra and drivers of that run.
+// learns from the demo capture (progress printed), its file goes where a learn job puts it, and
+// the profile row gets the modes, fit report, spectra and drivers of that run.
 import { LearnJob } from '../jobs/entities/learn-job.entity';
 import { JobState } from '../jobs/job-state';
 import { runInThread } from '../jobs/solve/run-in-thread';
@@ -41,7 +41,7 @@ export async function seedProfiles(
     const job = new LearnJob(profile, {}, submittedBy);
     job.moveTo(JobState.Solving, { worker: SEED_WORKER });
     const started = Date.now();
-    ctx.log(`learning the tissue profile "${p.name}" (about 20 s)…`);
+    ctx.log(`learning the tissue profile "${p.name}" from the capture…`);
     const reply = await runInThread(
       {
         kind: 'learn',

@@ -14,9 +14,10 @@ describe('shot list SQL', () => {
       { late: false, search: 'x' },
     ];
     for (const f of filters) {
-      const where = shotWhere('show-1', f, '2026-12-02');
-      expect(placeholders(where.sql), JSON.stringify(f)).toBe(where.params.length);
-      expect(where.params[0]).toBe('show-1');
+      const q = shotWhere('show-1', f, '2026-12-02');
+      expect(placeholders(q.from), JSON.stringify(f)).toBe(0);
+      expect(placeholders(q.where), JSON.stringify(f)).toBe(q.params.length);
+      expect(q.params[0]).toBe('show-1');
     }
   });
 
@@ -26,8 +27,14 @@ describe('shot list SQL', () => {
   });
 
   it('counts a shot without review state as not approved when it is late', () => {
-    const where = shotWhere('s', { late: true }, '2026-12-02');
-    expect(where.sql).toContain('s.review_state is null or s.review_state <> ?');
+    const q = shotWhere('s', { late: true }, '2026-12-02');
+    expect(q.where).toContain('s.review_state is null or s.review_state <> ?');
+  });
+
+  it('filters by assignee through the assignment key, one row per shot, without a subquery', () => {
+    const q = shotWhere('s', { assigneeId: 'u' }, '2026-12-02');
+    expect(q.from).toBe('shots s join shot_assignees sa on sa.shot_id = s.id');
+    expect(`${q.from} ${q.where}`).not.toMatch(/select|exists/i);
   });
 
   it('orders by the asked fields and then the id, so pages never overlap', () => {

@@ -100,8 +100,8 @@ export function dynamicSubspace(
 
 /**
  * The dynamic basis from tissue directions `rows` (K rows of D, with their `region`): made
- * orthogonal to `correctiveSpan` and orthonormal (rows that vanish are dropped), sign-fixed, ordered
- * by the energy of `dynamic` (T×D) along them, with its coefficients.
+ * orthogonal to `correctiveSpan` and orthonormal (rows that vanish are dropped), sign-fixed,
+ * ordered by the energy of `dynamic` (T×D) along them, with its coefficients.
  */
 export function basisFromDirections(
   dynamic: Float32Array,

@@ -128,7 +128,7 @@ export function identifyRegions(
   return assemble(models, fits, frames, k, character, clip, options.sg);
 }
 
-/** Block-diagonal A1, A2 and B0, B1 over the union of drivers; the intercept folded into inputMean. */
+/** Block-diagonal A1, A2, and B0, B1 over the union of drivers; intercept folded into inputMean. */
 function assemble(
   models: RegionModel[],
   fits: RegionFit[],
@@ -163,7 +163,12 @@ function assemble(
   models.forEach(({ model, drivers: rd, scale, rest: rr }, g) => {
     const rows = fits[g].rows;
     const map: number[] = [];
-    for (const dr of rd) for (const s of dr.signals) for (let a = 0; a < 3; a++) map.push(column.get(`${dr.joint}|${s}`)! + a); // prettier-ignore
+    for (const dr of rd) {
+      for (const s of dr.signals) {
+        const first = column.get(`${dr.joint}|${s}`) as number;
+        map.push(first, first + 1, first + 2);
+      }
+    }
     map.forEach((col, j) => {
       inputScale[col] = scale[j];
       rest[col] = rr[j];

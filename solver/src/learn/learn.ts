@@ -6,10 +6,10 @@
 // captures (noise-free 10 s / noisy 8 s): a pose fit on the 0.8 Hz low-passed residual with every
 // joint's specific force competing and the full-band fit where it explains a vertex, 0.10 / 0.27
 // (the tissue's slow sag under gravity follows the limbs' pose and leaked into the correctives);
-// alternating that fit with identified dynamics, 0.14 / 0.36 after three passes (the dynamics
-// learned from the leaky residual carried the leak back); projecting out a whole-body dynamic
-// basis, 0.05 / 0.13 after four passes (the basis took in corrective shapes); per-region
-// directions screened against the pose, 0.0004 / 0.05 in one pass.
+// alternating that fit with dynamics identified from it and run from the inputs, 0.18 / 0.36 after
+// three passes (the dynamics learned from the leaky residual carried the leak back); projecting
+// out a whole-body dynamic basis, 0.05 / 0.13 after four passes (the basis took in corrective
+// shapes); per-region directions screened against the pose, 0.0004 / 0.05 in one pass.
 import { identifyModes } from '../dynamics/modes.js';
 import { arxOfDynamics } from '../dynamics/simulate.js';
 import { SolverInputError } from '../errors.js';

@@ -67,7 +67,14 @@ export function screenComponents(
         s[i * l + j] = v;
       }
   }
-  for (let i = 0; i < l; i++) for (let j = 0; j < i; j++) s[i * l + j] = s[j * l + i] = 0.5 * (s[i * l + j] + s[j * l + i]); // prettier-ignore
+  // Exactly symmetric (the two halves differ by round-off).
+  for (let i = 0; i < l; i++) {
+    for (let j = 0; j < i; j++) {
+      const mean = 0.5 * (s[i * l + j] + s[j * l + i]);
+      s[i * l + j] = mean;
+      s[j * l + i] = mean;
+    }
+  }
   const rho = new Float64Array(l);
   const v = new Float64Array(l * l);
   symmetricEigen(s, l, rho, v);

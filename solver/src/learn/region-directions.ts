@@ -184,7 +184,8 @@ export function regionDirections(
       found.push({ row: pattern(i), region: r, energy: screen.energy[i] });
     }
     if (!leastExplained || screen.explained[0] < leastExplained.explained) {
-      leastExplained = { row: pattern(0), region: r, energy: screen.energy[0], explained: screen.explained[0] }; // prettier-ignore
+      const explained = screen.explained[0];
+      leastExplained = { row: pattern(0), region: r, energy: screen.energy[0], explained };
     }
     report.push({ region: name, components: l, explained: Array.from(screen.explained), kept });
   });

@@ -9,11 +9,12 @@
 // strength (one for the whole mesh) minimises the error on held-out frames at the end of the
 // capture, then every frame is used for the final fit.
 import { lowPassZeroPhase } from '../dynamics/low-pass.js';
-import { cholesky, choleskySolve } from '../linalg/ridge.js';
+import { cholesky, choleskySolve, gramColumns } from '../linalg/ridge.js';
 import { symmetricEigen } from '../linalg/sym-eigen.js';
 import type { Character, PoseCorrectives } from '../types.js';
 import { FEATURES_PER_JOINT } from './pose-features.js';
 import { groupVertices } from './vertex-groups.js';
+import { crossRows, poseRows } from './separate-kernels.js';
 
 export { influencingJoints } from './vertex-groups.js';
 
@@ -80,9 +81,10 @@ export function separatePoseDriven(
   const d = 3 * n;
   const jc = character.skeleton.names.length;
   const fw = jc * FEATURES_PER_JOINT;
-  const target = Float32Array.from(residuals);
   // A cut-off at or above the Nyquist frequency means no filter: the fit sees the full band.
   const filter = opts.cutoffHz < fps / 2;
+  // Filtering works in place on a copy; unfiltered, the residual is only read.
+  const target = filter ? residuals.slice() : residuals;
   if (filter) lowPassZeroPhase(target, frames, d, opts.cutoffHz, fps, { order: opts.lowPassOrder });
   // Unit-RMS features so one ridge strength treats small (θ²) and large (θ) entries alike.
   const fitFeatures = Float64Array.from(features.subarray(0, frames * fw));
@@ -134,15 +136,8 @@ export function separatePoseDriven(
         }
       });
     }
-    const gt = new Float64Array(p * p);
-    const gv = new Float64Array(p * p);
-    for (let t = 0; t < frames; t++) {
-      const gm = t < trainEnd ? gt : gv;
-      for (let a = 0; a < p; a++) {
-        const xa = x[t * p + a];
-        if (xa !== 0) for (let b = 0; b < p; b++) gm[a * p + b] += xa * x[t * p + b];
-      }
-    }
+    const gt = gramColumns(x, p, 0, trainEnd);
+    const gv = gramColumns(x, p, trainEnd, frames);
     const lambda = new Float64Array(p);
     const q = new Float64Array(p * p);
     symmetricEigen(Float64Array.from(gt), p, lambda, q);
@@ -151,55 +146,45 @@ export function separatePoseDriven(
     const cross = new Float64Array(g.vertices.length * 2 * p * 3);
     const groupErrors = new Float64Array(grid.length);
     const y = new Float64Array(frames * 3);
-    const zt = new Float64Array(p * 3);
-    const zv = new Float64Array(p * 3);
+    // Held-out error of every ridge strength, summed over the group's vertices and axes: with
+    // z = Qᵀc it is Σ rvr − 2 Σ_a u_a/(λ_a+λ) + Σ_ab (QᵀGvQ)_ab S_ab/((λ_a+λ)(λ_b+λ)), where
+    // S = Qᵀ(Σ ct ctᵀ)Q and u = diag Qᵀ(Σ ct cvᵀ)Q need only two p×p sums per group.
+    const mtt = new Float64Array(p * p);
+    const mtv = new Float64Array(p * p);
+    let rv = 0;
     g.vertices.forEach((i, vi) => {
       for (let t = 0; t < frames; t++) {
         y[3 * t] = target[t * d + 3 * i];
         y[3 * t + 1] = target[t * d + 3 * i + 1];
         y[3 * t + 2] = target[t * d + 3 * i + 2];
       }
-      const ct = cross.subarray(vi * 6 * p, vi * 6 * p + 3 * p);
-      const cv = cross.subarray(vi * 6 * p + 3 * p, (vi + 1) * 6 * p);
-      let rvr = 0;
-      for (let t = 0; t < frames; t++) {
-        const c = t < trainEnd ? ct : cv;
-        const y0 = y[3 * t], y1 = y[3 * t + 1], y2 = y[3 * t + 2]; // prettier-ignore
-        if (t >= trainEnd) rvr += y0 * y0 + y1 * y1 + y2 * y2;
-        for (let a = 0; a < p; a++) {
-          const xa = x[t * p + a];
-          if (xa === 0) continue;
-          c[3 * a] += xa * y0;
-          c[3 * a + 1] += xa * y1;
-          c[3 * a + 2] += xa * y2;
-        }
-      }
-      // Into the eigenbasis: z = Qᵀ c.
+      for (let t = trainEnd; t < frames; t++) rv += y[3 * t] ** 2 + y[3 * t + 1] ** 2 + y[3 * t + 2] ** 2; // prettier-ignore
+      const base = vi * 6 * p;
+      crossRows(x, p, y, 0, trainEnd, cross, base);
+      crossRows(x, p, y, trainEnd, frames, cross, base + 3 * p);
       for (let a = 0; a < p; a++) {
-        for (let ax = 0; ax < 3; ax++) {
-          let st = 0, sv = 0; // prettier-ignore
-          for (let b = 0; b < p; b++) {
-            st += q[b * p + a] * ct[3 * b + ax];
-            sv += q[b * p + a] * cv[3 * b + ax];
-          }
-          zt[3 * a + ax] = st;
-          zv[3 * a + ax] = sv;
+        const ta0 = cross[base + 3 * a], ta1 = cross[base + 3 * a + 1], ta2 = cross[base + 3 * a + 2]; // prettier-ignore
+        for (let b = 0; b < p; b++) {
+          const ob = base + 3 * b;
+          mtt[a * p + b] += ta0 * cross[ob] + ta1 * cross[ob + 1] + ta2 * cross[ob + 2];
+          mtv[a * p + b] += ta0 * cross[ob + 3 * p] + ta1 * cross[ob + 3 * p + 1] + ta2 * cross[ob + 3 * p + 2]; // prettier-ignore
         }
       }
-      grid.forEach((lam, li) => {
-        let err = rvr;
-        for (let ax = 0; ax < 3; ax++) {
-          for (let a = 0; a < p; a++) {
-            const ba = zt[3 * a + ax] / (lambda[a] + lam);
-            err -= 2 * ba * zv[3 * a + ax];
-            let s = 0;
-            for (let b = 0; b < p; b++) s += gvq[a * p + b] * (zt[3 * b + ax] / (lambda[b] + lam));
-            err += ba * s;
-          }
-        }
-        errors[li] += err;
-        groupErrors[li] += err;
-      });
+    });
+    const sq = rotate(mtt, q, p);
+    const uq = rotate(mtv, q, p);
+    const inv = new Float64Array(p);
+    grid.forEach((lam, li) => {
+      for (let a = 0; a < p; a++) inv[a] = 1 / (lambda[a] + lam);
+      let err = rv;
+      for (let a = 0; a < p; a++) {
+        err -= 2 * uq[a * p + a] * inv[a];
+        let s = 0;
+        for (let b = 0; b < p; b++) s += gvq[a * p + b] * sq[a * p + b] * inv[b];
+        err += s * inv[a];
+      }
+      errors[li] += err;
+      groupErrors[li] = err;
     });
     return { g, p, pp, xo, gram: gt.map((v, k) => v + gv[k]), cross, groupErrors };
   });
@@ -224,18 +209,7 @@ export function separatePoseDriven(
       const base = vi * 6 * p;
       for (let k = 0; k < 3 * p; k++) rhs[k] = cross[base + k] + cross[base + 3 * p + k];
       choleskySolve(a, p, rhs, 3);
-      for (let t = 0; t < frames; t++) {
-        let px = 0, py = 0, pz = 0; // prettier-ignore
-        for (let k = 0; k < pp; k++) {
-          const xv = xo[t * pp + k];
-          px += xv * rhs[3 * k];
-          py += xv * rhs[3 * k + 1];
-          pz += xv * rhs[3 * k + 2];
-        }
-        poseDisplacement[t * d + 3 * i] = px;
-        poseDisplacement[t * d + 3 * i + 1] = py;
-        poseDisplacement[t * d + 3 * i + 2] = pz;
-      }
+      poseRows(xo, pp, rhs, frames, poseDisplacement, d, 3 * i);
       g.joints.forEach((j, s) => {
         for (let f = 0; f < FEATURES_PER_JOINT; f++) {
           const k = s * FEATURES_PER_JOINT + f;

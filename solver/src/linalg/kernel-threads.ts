@@ -20,10 +20,13 @@ export interface KernelThreadsOptions {
   timeoutMs?: number;
 }
 
-/** Defaults: threads 0 means "cores − 1"; 5·10⁷ multiply-adds is about 25 ms of one thread. */
+/**
+ * Defaults: threads 0 means "cores − 1"; 10⁷ multiply-adds is about 5 ms of one thread, well
+ * above the cost of a split (posting the shares, copying a region-sized input: under 1 ms).
+ */
 export const KERNEL_THREADS_DEFAULTS: Required<KernelThreadsOptions> = {
   threads: 0,
-  minWork: 5e7,
+  minWork: 1e7,
   timeoutMs: 600_000,
 };
 
@@ -135,6 +138,16 @@ function shared(a: Floats, slot: 'x' | 'y' | 'out', scratch: Pool['scratch']): F
   const view = a instanceof Float32Array ? new Float32Array(buf, 0, a.length) : new Float64Array(buf, 0, a.length); // prettier-ignore
   if (slot !== 'out') view.set(a);
   return view;
+}
+
+/**
+ * `x` in shared memory for several products in a row: `x` itself without a pool or when already
+ * shared, else a copy in the pool's scratch. The copy stays valid until the next product whose
+ * snapshot input is outside shared memory; `x` must not change while it is used.
+ */
+export function sharedInput<A extends Floats>(x: A): A {
+  const p = pool;
+  return p ? (shared(x, 'x', p.scratch) as A) : x;
 }
 
 /** Boundaries splitting [0, n) into `parts` ranges, multiples of `align` except the last. */

@@ -3,6 +3,7 @@
 // block finds the range, a few power iterations sharpen it, and the small projected problem is
 // solved exactly. Seeded, so re-solves give the same bytes.
 import { multiplyByRows, multiplyTransposed } from './gram-kernel.js';
+import { sharedInput } from './kernel-threads.js';
 import { orthonormaliseColumns, orthonormaliseRows } from './orthonormalise.js';
 import { seededNormal } from './seeded-random.js';
 import { fixSigns } from './sign-fix.js';
@@ -35,6 +36,8 @@ export function randomizedSvd(
   options: RandomizedSvdOptions = {},
 ): Subspace {
   const opts = { ...RANDOMIZED_SVD_DEFAULTS, ...options };
+  // Six products read X: with worker threads, copy it to shared memory once, not six times.
+  x = sharedInput(x);
   const l = Math.min(rank + opts.oversampling, t, d);
   const normal = seededNormal(opts.seed);
   // Ω as l rows of D; Y = X Ωᵀ (T×l).

@@ -1,12 +1,15 @@
 // The take .glb carries the pose correctives as morph targets after the K dynamic ones, so any
 // glTF viewer plays skinning + correctives + gain × dynamics, and live tuning rescales only the
 // dynamic part. three.js is the reference glTF implementation; the Khronos validator checks the file.
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import {
   clipFramePose,
   createLiveTuner,
   createPose,
   matchClipJoints,
+  readCharacter,
+  readClip,
   readTakeGlb,
   retarget,
   skinningMatrices,
@@ -128,6 +131,26 @@ describe('take .glb with pose correctives', () => {
         else expect(v).toBe(-9);
       }
     }
+  });
+
+  it('is valid with corrective targets carried onto another topology (closest-point transfer)', async () => {
+    const files = new URL('../../../assets-sample/files/', import.meta.url);
+    const load = async (name: string) =>
+      readCharacter(new Uint8Array(readFileSync(new URL(`characters/${name}`, files))));
+    const coach = await load('coach-madge.glb');
+    const swimmer = await load('swimmer-otto.glb');
+    const mode = { frequencyHz: 2.2, dampingRatio: 0.12, joint: 'Spine', driver: 'Spine', gain: [0, -0.21, 0] as [number, number, number] }; // prettier-ignore
+    const coachProfile = knownProfile(coach, 60, [mode], { correctiveJoint: 'Spine' });
+    const shot = await readClip(new Uint8Array(readFileSync(new URL('clips/swimmer-run.glb', files))), 'gltf'); // prettier-ignore
+    const jointMap = { Hips: 'pelvis', Spine: 'spine_01', Spine1: 'spine_02', Spine2: 'spine_03' };
+    const result = retarget(coachProfile, swimmer, shot, { jointMap });
+    expect(result.take.metrics.transfer).toBe('closest-point');
+    const glb = await writeTakeGlb(result.take, swimmer, result.clip);
+    expect(await validatorErrors(glb)).toEqual([]);
+    const file = await readTakeGlb(glb);
+    expect(file.layout.corrective.count).toBeGreaterThanOrEqual(1);
+    const gltf = await parseGlb(glb);
+    expect(skinnedMeshOf(gltf).morphTargetInfluences).toHaveLength(file.layout.count);
   });
 
   it('reads version 1 takes as dynamic targets only and rejects a layout that does not add up', async () => {

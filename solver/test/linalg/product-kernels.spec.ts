@@ -2,7 +2,13 @@
 // split against the single-thread kernels (the split must give the same bits).
 import { Matrix } from 'ml-matrix';
 import { afterEach, describe, expect, it } from 'vitest';
-import { gramColumns, multiplyByRows, multiplyTransposed, snapshotGram } from '../../src/index.js';
+import {
+  gramColumns,
+  multiplyByRows,
+  multiplyTransposed,
+  randomizedSvd,
+  snapshotGram,
+} from '../../src/index.js';
 import {
   kernelThreadCount,
   startKernelThreads,
@@ -60,6 +66,14 @@ describe('snapshot products', () => {
       await stopKernelThreads();
     }
     expect(kernelThreadCount()).toBe(0);
+  });
+
+  it('leave a randomized SVD unchanged to the bit when its products run on worker threads', async () => {
+    const alone = randomizedSvd(x, T, D, 5, { seed: 3 });
+    await startKernelThreads({ threads: 1, minWork: 0 });
+    const split = randomizedSvd(x, T, D, 5, { seed: 3 });
+    expect(bits(split.basis, alone.basis)).toBe(true);
+    expect(bits(split.coefficients, alone.coefficients)).toBe(true);
   });
 
   it('keep one pool: starting again reports the running threads, stopping twice is harmless', async () => {
