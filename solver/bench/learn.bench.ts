@@ -3,6 +3,17 @@
 // damped jiggle on the belly). Prints wall time per stage, on the calling thread alone and with
 // the big products split over worker threads, and the leading-eigenpair solver against a full
 // decomposition. The products themselves are compared in product-kernels.bench.ts.
+//
+// Approaches tried (wall times on the shared 2-core machine, load average 4–8, so ±30 %):
+// - before this work: 19.3 s. Faster products (register-blocked Gram and thin products,
+//   `gramColumns`, subspace iteration for the leading eigenpairs, 7.6× a full EVD here): 15.9 s.
+// - per-region tissue directions, correctives fitted with them projected out: 10.1–11.1 s, half
+//   of it in the pose-driven fit, whose held-out ridge errors cost p² per vertex with a division
+//   inside. Two p × p sums per vertex group and register-blocked cross products instead: 6.8 s
+//   at load 4; 12.3 s wall / 6.2 s busiest-thread cpu at load 6.2 in the last run.
+// - with one kernel worker thread: 8.8 s wall / 5.2 s cpu at load 6.3 (bit-identical profile).
+// - tfjs-backend-wasm SIMD for the Gram: see product-kernels.bench.ts (faster on its own, Float32
+//   sums; not kept).
 import { cpus, loadavg } from 'node:os';
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { learnProfile, snapshotGram, topEigen } from '../src/index.js';

@@ -3,6 +3,21 @@
 // hold even when the shared machine's load moves the absolute figures. Each figure is the best
 // of `REPEATS` runs. The reference is ml-matrix (straightforward dense mmul), timed on a
 // 2,000-column slice and scaled by width (the full products take tens of seconds).
+//
+// Approaches tried for the Gram (busiest-thread cpu, best of 3, load average 7.9 on the shared
+// 2-core machine; the wall times move with the load, the cpu times much less):
+// - ml-matrix mmul: 21.7 s (scaled from the slice); a plain dot-product loop: 6.0 s.
+// - Float64 tiles of 256 columns, 4 × 4 register blocks: 2.1 s; register blocks straight on the
+//   Float32 rows over 512-column blocks: 2.0 s — kept (no packing copy, Float64 sums).
+// - tfjs-backend-wasm SIMD matMul (devDependency, for this comparison only): 6.0 s with
+//   transposeB; 0.71 s on a pre-transposed copy of X (another 54 MB), 2.8× the kept kernel, but
+//   with Float32 sums (relative error 1e-5, so re-solves would not be byte-identical across
+//   backends) and a WASM module to ship and load in workers and browsers. Not kept.
+// - kept + worker threads (SharedArrayBuffer, blocking wait; bit-identical): 1.0 s with one
+//   worker (1.8 s wall: the second core was busy), 0.76 s with two (3.2 s wall: more threads than
+//   cores). Optional: `startKernelThreads` (the CLI's --threads, SOLVER_THREADS in the worker).
+// The thin products: (XᵀV)ᵀ 1.26 s as an axpy per (row, column), 0.35 s as packed slabs with 4 × 4
+// blocks (kept); XWᵀ 0.47 s with 1 × 4 blocks, 0.32 s with 4 × 4 (kept).
 import { loadavg } from 'node:os';
 import { createRequire } from 'node:module';
 import { Matrix } from 'ml-matrix';

@@ -20,7 +20,10 @@ import { cpus, loadavg } from 'node:os';
 import { Matrix } from 'ml-matrix';
 import {
   createLiveTuner,
+  createPoleEditor,
+  editPoles,
   mapJoints,
+  rebuildDynamics,
   retarget,
   transferBasis,
   writeTakeGlb,
@@ -52,10 +55,11 @@ export async function runRetargetBench(): Promise<void> {
       onProgress: (stage) => stages.push([stage, performance.now()]),
     });
   });
-  const shares = stages
-    .slice(0, -1)
-    .map(([s, t], i) => `${s} ${(stages[i + 1][1] - t).toFixed(0)}`)
-    .filter((x, i, a) => a.findIndex((y) => y.split(' ')[0] === x.split(' ')[0]) === i)
+  // Time from each stage report to the next, summed per stage, as a share of the bake.
+  const perStage = new Map<string, number>();
+  stages.slice(0, -1).forEach(([s, t], i) => perStage.set(s, (perStage.get(s) ?? 0) + stages[i + 1][1] - t)); // prettier-ignore
+  const shares = [...perStage]
+    .map(([s, ms]) => `${s} ${ms.toFixed(0)} ms (${((100 * ms) / bakeMs).toFixed(0)} %)`)
     .join(', ');
   const { take, clip: shot } = result!;
   let glb: Uint8Array = new Uint8Array(0);
@@ -64,7 +68,7 @@ export async function runRetargetBench(): Promise<void> {
   const cm = correctiveMorphs(take.correctives, target.skeleton, shot);
   console.log(
     `retarget  bake ${shot.frameCount} frames onto ${target.restPositions.length / 3} vertices, K = ${K}: ` +
-      `${bakeMs.toFixed(0)} ms wall, ${bakeCpu.toFixed(0)} ms cpu (target ≤ 2,000; wall ms per stage: ${shares}); ` +
+      `${bakeMs.toFixed(0)} ms wall, ${bakeCpu.toFixed(0)} ms cpu (target ≤ 2,000; stages, wall: ${shares}); ` +
       `writing the .glb ${write.wall.toFixed(0)} ms wall, ${write.cpu.toFixed(0)} ms cpu (${(glb.byteLength / 1e6).toFixed(1)} MB), ` +
       `of which ${cm.count} corrective morph targets ${morphs.wall.toFixed(0)} ms wall, ${morphs.cpu.toFixed(0)} ms cpu ` +
       `(error bound ${(cm.errorBound * 1000).toFixed(3)} mm)`,
@@ -101,6 +105,18 @@ export async function runRetargetBench(): Promise<void> {
     for (let i = 0; i < runs; i++) tuner.tune({ ...controls, stiffness: 1 + 0.001 * i });
   });
   const liveMs = liveRun.wall / runs;
+  // Stage shares: the pole edit and A1/A2 rebuild alone (the library's own calls), the rest
+  // (equilibrium, the run, sampling, gain) by difference.
+  const ed = createPoleEditor(live.live.modal);
+  const [a1, a2] = [new Float64Array(K * K), new Float64Array(K * K)];
+  const scratch = new Float64Array(2 * K * K);
+  const poleMs =
+    (await timeIt(() => {
+      for (let i = 0; i < runs; i++) {
+        editPoles(ed, 1 + 0.001 * i, 0.9);
+        rebuildDynamics(ed, a1, a2, scratch);
+      }
+    })) / runs;
   const naiveRuns = 5;
   naiveSimulate(tuner.a1, tuner.a2, live.live.drive, K);
   const naiveMs =
@@ -109,6 +125,7 @@ export async function runRetargetBench(): Promise<void> {
     })) / naiveRuns;
   console.log(
     `live      re-simulate ${live.live.simFrames} frames, K = ${K} (pole edit, equilibrium, run, sampling): ${liveMs.toFixed(2)} ms per call wall, ${(liveRun.cpu / runs).toFixed(2)} ms cpu (target ≤ 4 ms); ` +
+      `pole edit + A1/A2 rebuild ${poleMs.toFixed(2)} ms (${((100 * poleMs) / liveMs).toFixed(0)} %), equilibrium + run + sampling + gain ${(liveMs - poleMs).toFixed(2)} ms (${((100 * (liveMs - poleMs)) / liveMs).toFixed(0)} %); ` +
       `ml-matrix per-frame reference ${naiveMs.toFixed(2)} ms → ${(naiveMs / liveMs).toFixed(1)}× faster`,
   );
 }

@@ -143,15 +143,21 @@ export type { LiveControls, LiveTuner } from './live/live-tune.js';
 export { rescaleRegionGains } from './live/region-rescale.js';
 export { luFactor, luSolve } from './linalg/lu-solve.js';
 export { writeTakeGlb } from './io/take-writer.js';
+export type { WriteTakeOptions } from './io/take-writer.js';
 export { readTakeGlb } from './io/take-reader.js';
 export type { TakeFile } from './io/take-reader.js';
 export {
   takeExtras,
   liveTuneDataFromExtras,
   asTakeExtras,
+  takeMorphLayout,
+  morphWeightsOf,
+  setDynamicMorphWeights,
   TAKE_EXTRAS_VERSION,
 } from './io/take-extras.js';
-export type { TakeExtras } from './io/take-extras.js';
+export type { TakeExtras, TakeMorphLayout } from './io/take-extras.js';
+export { correctiveMorphs, CORRECTIVE_MORPH_DEFAULTS } from './retarget/corrective-morphs.js';
+export type { CorrectiveMorphOptions, CorrectiveMorphs } from './retarget/corrective-morphs.js';
 export { packArray, unpackArray, encodeBase64, decodeBase64 } from './io/packed-arrays.js';
 export type { PackedArray, PackedType } from './io/packed-arrays.js';
 // ─── end retarget ───
@@ -159,9 +165,20 @@ export type { PackedArray, PackedType } from './io/packed-arrays.js';
 // ─── learn: tissue profiles ───
 export { learnProfile, LEARN_DEFAULTS } from './learn/learn.js';
 export type { LearnOptions, LearnResult, LearnStage } from './learn/learn.js';
-export { separatePoseDriven, SEPARATE_DEFAULTS, influencingJoints } from './learn/separate.js';
+export {
+  separatePoseDriven,
+  SEPARATE_DEFAULTS,
+  MIN_FEATURE_RMS,
+  influencingJoints,
+} from './learn/separate.js';
 export type { SeparateOptions, Separation } from './learn/separate.js';
-export { poseFeatures, applyCorrectives, FEATURES_PER_JOINT } from './learn/pose-features.js';
+export {
+  poseFeatures,
+  applyCorrectives,
+  clampFeatures,
+  featureRange,
+  FEATURES_PER_JOINT,
+} from './learn/pose-features.js';
 export { selectDrivers, SELECT_DRIVERS_DEFAULTS } from './learn/select-drivers.js';
 export type { SelectDriversOptions } from './learn/select-drivers.js';
 export { dynamicSubspace, leadingSubspace } from './learn/dynamic-subspace.js';
@@ -213,6 +230,15 @@ export {
 export { welchPsd, spectrumPeaks, floorPowerOfTwo } from './dynamics/spectrum.js';
 export type { Spectrum, WelchOptions } from './dynamics/spectrum.js';
 export { gramBasis, basisFromGram } from './linalg/gram-basis.js';
+// Optional worker threads for the big products (Node; in browsers start resolves to 0). The
+// module imports node:worker_threads only inside startKernelThreads, so bundles stay clean.
+export {
+  startKernelThreads,
+  stopKernelThreads,
+  kernelThreadCount,
+  KERNEL_THREADS_DEFAULTS,
+} from './linalg/kernel-threads.js';
+export type { KernelThreadsOptions } from './linalg/kernel-threads.js';
 export { snapshotGram, multiplyTransposed, multiplyByRows } from './linalg/gram-kernel.js';
 export { randomizedSvd, RANDOMIZED_SVD_DEFAULTS } from './linalg/randomized-svd.js';
 export type { RandomizedSvdOptions } from './linalg/randomized-svd.js';

@@ -177,6 +177,14 @@ export interface PoseCorrectives {
   coefficients: Float32Array;
   /** Ridge strength chosen on held-out frames. */
   ridgeLambda: number;
+  /**
+   * Range of each joint's features over the training frames (J × 9, indexed like featureJoints):
+   * features are clamped into it when the correctives are evaluated, so a pose beyond the capture
+   * holds the corrective it reached instead of extrapolating. Absent in profiles written before
+   * it existed (evaluated unclamped).
+   */
+  featureMin?: Float64Array;
+  featureMax?: Float64Array;
 }
 
 /**
@@ -317,7 +325,7 @@ export interface Take {
   basis: Float32Array;
   /** Per-vertex gain baked into the basis (N'). */
   vertexGains: Float32Array;
-  /** The profile's pose correctives carried onto the target (not stored in the take .glb). */
+  /** The profile's pose correctives carried onto the target (the take .glb holds them as corrective morph targets over the shot). */
   correctives: PoseCorrectives;
   /** Dynamic coefficients c_t per shot frame (T × K), before gain. */
   coefficients: Float32Array;

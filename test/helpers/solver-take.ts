@@ -30,7 +30,6 @@ export async function makeK32Take(): Promise<SolverTake> {
   const clip = await readClip(await read('clips/coach-poolside-drill.glb'), 'gltf');
   const { profile } = learnProfile(character, capture, {
     maxModes: 32,
-    varianceTarget: 0.99999,
     noiseFactor: 0,
     minEnergyShare: 0,
   });

@@ -63,6 +63,15 @@ export interface TakeExtras {
   };
 }
 
+/** A warning when the corrective targets could not reach the tolerance within their cap. */
+function correctiveWarnings(c: TakeMorphLayout['corrective']): string[] {
+  if (!(c.errorBound > c.tolerance)) return [];
+  const mm = (v: number) => `${(v * 1000).toPrecision(2)} mm`;
+  return [
+    `pose correctives: ${c.count} corrective morph targets leave an offset error of up to ${mm(c.errorBound)}, above the ${mm(c.tolerance)} tolerance`,
+  ];
+}
+
 /** The extras block of a take whose mesh carries `corrective` morph targets after the K dynamic ones. */
 export function takeExtras(
   take: Take,
@@ -85,7 +94,7 @@ export function takeExtras(
     controls: take.controls,
     modes: take.modes,
     metrics: take.metrics,
-    warnings: take.warnings,
+    warnings: [...take.warnings, ...correctiveWarnings(morphTargets.corrective)],
     coefficients: packArray('f32', take.coefficients),
     vertexGains: packArray('f32', take.vertexGains),
     dynamics: { a1: packArray('f64', take.a1), a2: packArray('f64', take.a2) },

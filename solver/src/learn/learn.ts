@@ -9,7 +9,8 @@
 // alternating that fit with dynamics identified from it and run from the inputs, 0.18 / 0.36 after
 // three passes (the dynamics learned from the leaky residual carried the leak back); projecting
 // out a whole-body dynamic basis, 0.05 / 0.13 after four passes (the basis took in corrective
-// shapes); per-region directions screened against the pose, 0.0004 / 0.05 in one pass.
+// shapes); per-region directions screened against the pose, 0.0004 / 0.05 in one pass; with root
+// joints and round-off features left out of the correctives, 0.00006 / 0.047.
 import { identifyModes } from '../dynamics/modes.js';
 import { arxOfDynamics } from '../dynamics/simulate.js';
 import { SolverInputError } from '../errors.js';

@@ -64,8 +64,52 @@ export function poseFeatures(skeleton: Skeleton, clip: Clip): Float64Array {
 }
 
 /**
+ * Clamps `frames` frames of pose features (T × J × 9, from poseFeatures) in place into the
+ * training range the correctives carry; without one (older profiles) they stay as they are.
+ */
+export function clampFeatures(
+  correctives: PoseCorrectives,
+  features: Float64Array,
+  frames: number,
+): Float64Array {
+  const { featureMin: lo, featureMax: hi } = correctives;
+  if (!lo || !hi) return features;
+  const w = lo.length;
+  for (let t = 0; t < frames; t++) {
+    for (let k = 0; k < w; k++) {
+      const v = features[t * w + k];
+      features[t * w + k] = v < lo[k] ? lo[k] : v > hi[k] ? hi[k] : v;
+    }
+  }
+  return features;
+}
+
+/** Smallest and largest value of each feature (J × 9) over `frames` frames of `features`. */
+export function featureRange(
+  features: ArrayLike<number>,
+  frames: number,
+  width: number,
+): { featureMin: Float64Array; featureMax: Float64Array } {
+  const featureMin = new Float64Array(width);
+  const featureMax = new Float64Array(width);
+  for (let k = 0; k < width && frames > 0; k++) {
+    let lo = features[k];
+    let hi = lo;
+    for (let t = 1; t < frames; t++) {
+      const v = features[t * width + k];
+      if (v < lo) lo = v;
+      else if (v > hi) hi = v;
+    }
+    featureMin[k] = lo;
+    featureMax[k] = hi;
+  }
+  return { featureMin, featureMax };
+}
+
+/**
  * Pose-driven offsets (rest space, 3N) of one frame: out = Σ_slots Σ_f feature · coefficient,
- * with `features` the frame's J × 9 block (from poseFeatures) starting at `featureOffset`.
+ * with `features` the frame's J × 9 block (from poseFeatures) starting at `featureOffset`, each
+ * feature clamped into the correctives' training range when they carry one.
  */
 export function applyCorrectives(
   correctives: PoseCorrectives,
@@ -74,16 +118,17 @@ export function applyCorrectives(
   out: Float32Array | Float64Array,
   outOffset = 0,
 ): void {
-  const { featureJoints, coefficients, featuresPerVertex: fpv } = correctives;
+  const { featureJoints, coefficients, featuresPerVertex: fpv, featureMin: lo, featureMax: hi } = correctives; // prettier-ignore
   const n = featureJoints.length / 4;
   const slots = fpv / FEATURES_PER_JOINT;
   for (let i = 0; i < n; i++) {
     let x = 0, y = 0, z = 0; // prettier-ignore
     for (let s = 0; s < slots; s++) {
-      const fo = featureOffset + featureJoints[4 * i + s] * FEATURES_PER_JOINT;
+      const jo = featureJoints[4 * i + s] * FEATURES_PER_JOINT;
       const co = i * 3 * fpv + s * FEATURES_PER_JOINT;
       for (let f = 0; f < FEATURES_PER_JOINT; f++) {
-        const v = features[fo + f];
+        let v = features[featureOffset + jo + f];
+        if (lo && hi) v = v < lo[jo + f] ? lo[jo + f] : v > hi[jo + f] ? hi[jo + f] : v;
         if (v === 0) continue;
         x += v * coefficients[co + f];
         y += v * coefficients[co + fpv + f];

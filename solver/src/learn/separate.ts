@@ -1,18 +1,20 @@
 // Pose-driven part of the unposed residual: per vertex, a ridge regression of its rest-space
 // offset on the pose features (R − I) of the joints that skin it (local support keeps it sparse;
 // pose space deformation, Lewis, Cordner & Fong 2000); the joints are the skin joints and their
-// children, at most four. The regression is fitted to the residual and the features after the
-// same zero-phase low-pass, so oscillation above the cut-off stays in the dynamic part; optional
-// competing signals (tissue inputs) are fitted alongside and dropped, so that the slow tissue
-// response they explain does not leak into the correctives.
+// children, at most four (no root: see vertex-groups.ts). With a cut-off, the regression is
+// fitted to the residual and the features after the same zero-phase low-pass, so oscillation
+// above it stays in the dynamic part (learning projects the tissue directions out instead and
+// uses none); optional competing signals (tissue inputs) are fitted alongside and dropped, so
+// that the slow tissue response they explain does not leak into the correctives.
 // Vertices skinned by the same joints share one normal matrix, factored once per group; the ridge
-// strength (one for the whole mesh) minimises the error on held-out frames at the end of the
-// capture, then every frame is used for the final fit.
+// strength (per group, or one for the whole mesh) minimises the error on held-out frames at the
+// end of the capture, then every frame is used for the final fit. The correctives carry each
+// feature's range over the capture, into which evaluation clamps them (pose-features.ts).
 import { lowPassZeroPhase } from '../dynamics/low-pass.js';
 import { cholesky, choleskySolve, gramColumns } from '../linalg/ridge.js';
 import { symmetricEigen } from '../linalg/sym-eigen.js';
 import type { Character, PoseCorrectives } from '../types.js';
-import { FEATURES_PER_JOINT } from './pose-features.js';
+import { FEATURES_PER_JOINT, featureRange } from './pose-features.js';
 import { groupVertices } from './vertex-groups.js';
 import { crossRows, poseRows } from './separate-kernels.js';
 
@@ -44,14 +46,23 @@ export interface SeparateOptions {
   filterFeatures?: boolean;
 }
 
-/** Defaults: 0.8 Hz keeps tissue oscillation (typically 1.5–8 Hz) out of the correctives. */
+/**
+ * Smallest RMS of a pose feature (an entry of R − I) that enters the fit: 1e-6 is about ten times
+ * the resolution of a unit quaternion stored as float32 (6e-8), so anything below is round-off.
+ */
+export const MIN_FEATURE_RMS = 1e-6;
+
+/**
+ * Defaults, as learning uses them: no low-pass (with the tissue directions projected out first,
+ * a cut-off only cost accuracy; see LEARN_DEFAULTS) and a ridge strength per group of vertices.
+ */
 export const SEPARATE_DEFAULTS: Required<SeparateOptions> = {
-  cutoffHz: 0.8,
+  cutoffHz: Infinity,
   lowPassOrder: 4,
   heldOutFraction: 0.2,
   ridgeGrid: [1e-8, 1e-7, 1e-6, 1e-5, 1e-4, 1e-3, 1e-2, 1e-1, 1, 10],
   competing: null,
-  perGroupRidge: false,
+  perGroupRidge: true,
   filterFeatures: true,
 };
 
@@ -93,7 +104,12 @@ export function separatePoseDriven(
   const scale = new Float64Array(fw);
   for (let t = 0; t < frames; t++)
     for (let f = 0; f < fw; f++) scale[f] += fitFeatures[t * fw + f] ** 2;
-  for (let f = 0; f < fw; f++) scale[f] = Math.sqrt(scale[f] / frames) || 1;
+  for (let f = 0; f < fw; f++) scale[f] = Math.sqrt(scale[f] / frames);
+  // A feature that does not vary beyond round-off (an axis the joint never turns about) is left
+  // out: scaled to unit RMS it turned 1e-12 of noise into a regressor with a 1e7 m coefficient,
+  // which any shot that does turn that way multiplied into kilometres of offset. An infinite
+  // scale makes its column and its coefficient 0.
+  for (let f = 0; f < fw; f++) if (!(scale[f] >= MIN_FEATURE_RMS)) scale[f] = Infinity;
   const extra = opts.competing;
   const ew = extra ? jc * extra.perJoint : 0;
   const epj = extra ? extra.perJoint : 0;
@@ -221,7 +237,13 @@ export function separatePoseDriven(
     });
   }
   return {
-    correctives: { featuresPerVertex: fpv, featureJoints, coefficients, ridgeLambda: lam },
+    correctives: {
+      featuresPerVertex: fpv,
+      featureJoints,
+      coefficients,
+      ridgeLambda: lam,
+      ...featureRange(features, frames, fw),
+    },
     poseDisplacement,
     ridgeErrors: Array.from(errors),
   };

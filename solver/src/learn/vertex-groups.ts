@@ -13,14 +13,18 @@ export interface Group {
 }
 
 /**
- * The ≤ 4 joints whose rotation can move vertex i: its skin joints and their children (a bone's
+ * The ≤ 4 joints whose rotation can deform vertex i: its skin joints and their children (a bone's
  * flesh also bulges when the joint at its far end bends), ranked by skin weight, a child scoring
- * half its parent's weight. Sorted by joint index.
+ * half its parent's weight. Sorted by joint index. Root joints are left out: their rotation is
+ * the whole character's orientation, which moves the mesh rigidly and deforms nothing (as a
+ * feature it made a shot that turns the character round extrapolate correctives learned from a
+ * capture that faced one way to kilometres).
  */
 export function influencingJoints(character: Character, i: number, children: number[][]): number[] {
+  const { parents } = character.skeleton;
   const score = new Map<number, number>();
   const add = (j: number, s: number): void => {
-    score.set(j, Math.max(score.get(j) ?? 0, s));
+    if (parents[j] >= 0) score.set(j, Math.max(score.get(j) ?? 0, s));
   };
   for (let s = 0; s < 4; s++) {
     const w = character.skinWeights[4 * i + s];

@@ -1,13 +1,17 @@
 // The take's pose correctives as a few morph targets with a weight per shot frame, so that any
 // glTF viewer shows skinning + correctives + gain × dynamics. Over the shot the corrective offsets
-// form X = F C (T × 3N): F holds the frames' pose features (R − I per joint), C each feature's
-// per-vertex offsets (sparse: a vertex has at most four joints' features). X is never formed:
-// its leading singular triplets come from small products with F, the P×P matrix C Cᵀ and a
-// sparse pass over C (randomized range finder, Halko, Martinsson & Tropp 2011, Algorithms 4.4
-// and 5.1; exact when the active features fit in the block). Targets are added until a bound on
-// the offset error of any vertex in any frame falls below the tolerance: σ_{R+1} when exact (the
-// spectral norm of the rest bounds each frame's row), else the Frobenius norm of the rest.
-import { poseFeatures } from '../learn/pose-features.js';
+// form X = F C (T × 3N): F holds the frames' pose features (R − I per joint, clamped into the range
+// the correctives were learned on), C each feature's per-vertex offsets (sparse: a vertex has at
+// most four joints' features). X is never formed: its leading right singular vectors come from
+// small products with F, the P×P matrix G = C Cᵀ and a sparse pass over C (randomized range
+// finder, Halko, Martinsson & Tropp 2011, Algorithms 4.4 and 5.1; exact when the active features
+// fit in the block). The weights are the frames' projections onto those orthonormal targets, so
+// each frame's error norm follows from G exactly; targets are added until the largest of them
+// (a bound on any vertex's offset error in any frame) falls below the tolerance.
+// Before the clamp and the projections (weights were Q U Σ, not projections), a profile learned
+// on a capture whose spine and root barely turned gave, on a shot that turns round, weights of
+// 1e7 on targets of norm 1e-8 and a Frobenius-norm bound of 4 m.
+import { clampFeatures, poseFeatures } from '../learn/pose-features.js';
 import { orthonormaliseColumns } from '../linalg/orthonormalise.js';
 import { seededNormal } from '../linalg/seeded-random.js';
 import { fixSigns } from '../linalg/sign-fix.js';
@@ -64,7 +68,8 @@ export function correctiveMorphs(
   if (coefficients.length === 0 || t === 0) return none();
   const slots = Math.min(4, fpv / 9);
   const pw = skeleton.names.length * 9;
-  const features = poseFeatures(skeleton, clip);
+  // Clamped into the training range: beyond it the linear map would extrapolate without bound.
+  const features = clampFeatures(correctives, poseFeatures(skeleton, clip), t);
   // Active features: used by some vertex with a non-zero coefficient and non-zero in some frame.
   const used = new Uint8Array(pw);
   for (let i = 0; i < n; i++) {
@@ -121,32 +126,46 @@ export function correctiveMorphs(
   const u = new Float64Array(l * l);
   symmetricEigen(h, l, values, u);
   const sigma = Array.from(values, (v) => Math.sqrt(Math.max(0, v)));
-  // Error bound with R targets: σ_{R+1} when the block holds the whole range (‖X − X_R‖₂, which
-  // bounds every row); else the Frobenius norm of the rest, ‖X‖²_F − Σ σ_r² (bounds any entry).
-  const exact = l === p || l === t;
-  const total = exact ? 0 : traceProduct(fa, t, p, gc);
-  let captured = 0;
-  const bound = (r: number): number =>
-    exact ? (r < l ? sigma[r] : 0) : Math.sqrt(Math.max(0, total - captured));
-  let count = 0;
-  while (
-    count < Math.min(opts.maxTargets, l) &&
-    sigma[count] > 0 &&
-    bound(count) > opts.tolerance
-  ) {
-    captured += sigma[count] ** 2;
-    count++;
-  }
-  const errorBound = bound(count);
-  if (count === 0) return { ...none(), errorBound };
-  // Basis rows V_r = σ_r⁻¹ u_rᵀ W C (sparse pass over C); weights Q U Σ.
-  const m = new Float64Array(count * p);
-  for (let r = 0; r < count; r++) {
+  // Right singular vectors v_r = σ_r⁻¹ u_rᵀ W C: orthonormal rows, kept as M = Σ⁻¹ Uᵀ W (l × p)
+  // in feature space. Directions below 1e-6 σ₁ are left out: their σ² is at round-off in H.
+  let usable = 0;
+  while (usable < l && sigma[usable] > 1e-6 * sigma[0]) usable++;
+  const m = new Float64Array(usable * p);
+  for (let r = 0; r < usable; r++) {
     for (let a = 0; a < l; a++) {
       const f = u[a * l + r] / sigma[r];
       if (f !== 0) for (let c = 0; c < p; c++) m[r * p + c] += f * w[a * p + c];
     }
   }
+  // Weights are projections, x_t · v_r = f_t C Cᵀ m_r = (F G Mᵀ)_tr, so that each frame's error
+  // is orthogonal to the targets and its squared norm is ‖x_t‖² − Σ_r w_tr², with
+  // ‖x_t‖² = f_t G f_tᵀ. The largest over frames bounds every vertex's error in every frame.
+  const gm = multiply(m, gc, usable, p, p); // (G Mᵀ)ᵀ = M G, G symmetric
+  const proj = new Float64Array(t * usable);
+  const left = new Float64Array(t);
+  for (let r = 0; r < t; r++) {
+    const fr = fa.subarray(r * p, (r + 1) * p);
+    for (let c = 0; c < usable; c++) {
+      let s = 0;
+      for (let b = 0; b < p; b++) s += fr[b] * gm[c * p + b];
+      proj[r * usable + c] = s;
+    }
+    left[r] = quadraticForm(fr, gc, p);
+  }
+  const bound = (): number => {
+    let worst = 0;
+    for (let r = 0; r < t; r++) worst = Math.max(worst, left[r]);
+    return Math.sqrt(worst);
+  };
+  let count = 0;
+  let errorBound = bound();
+  while (count < Math.min(opts.maxTargets, usable) && errorBound > opts.tolerance) {
+    for (let r = 0; r < t; r++) left[r] -= proj[r * usable + count] ** 2;
+    count++;
+    errorBound = bound();
+  }
+  if (count === 0) return { ...none(), errorBound };
+  // Basis rows V_r = M_r C (sparse pass over C).
   const basis = new Float64Array(count * 3 * n);
   for (let i = 0; i < n; i++) {
     for (let s = 0; s < slots; s++) {
@@ -163,13 +182,8 @@ export function correctiveMorphs(
     }
   }
   const coeff = new Float64Array(t * count);
-  for (let r = 0; r < t; r++) {
-    for (let c = 0; c < count; c++) {
-      let s = 0;
-      for (let a = 0; a < l; a++) s += q[r * l + a] * u[a * l + c];
-      coeff[r * count + c] = s * sigma[c];
-    }
-  }
+  for (let r = 0; r < t; r++)
+    for (let c = 0; c < count; c++) coeff[r * count + c] = proj[r * usable + c];
   fixSigns(basis, 3 * n, count, coeff, t);
   return { count, basis: Float32Array.from(basis), weights: Float32Array.from(coeff), errorBound };
 }
@@ -214,19 +228,17 @@ function featureGram(
   return g;
 }
 
-/** ‖F C‖²_F = Σ_t f_tᵀ (C Cᵀ) f_t for F (t × p) and G = C Cᵀ (p × p). */
-function traceProduct(f: Float64Array, t: number, p: number, g: Float64Array): number {
+/** f G fᵀ for a row f (p) and a symmetric G (p × p); never below 0. */
+function quadraticForm(f: Float64Array, g: Float64Array, p: number): number {
   let s = 0;
-  for (let r = 0; r < t; r++) {
-    for (let a = 0; a < p; a++) {
-      const v = f[r * p + a];
-      if (v === 0) continue;
-      let row = 0;
-      for (let b = 0; b < p; b++) row += g[a * p + b] * f[r * p + b];
-      s += v * row;
-    }
+  for (let a = 0; a < p; a++) {
+    const v = f[a];
+    if (v === 0) continue;
+    let row = 0;
+    for (let b = 0; b < p; b++) row += g[a * p + b] * f[b];
+    s += v * row;
   }
-  return s;
+  return Math.max(0, s);
 }
 
 /** F G Fᵀ Q for F (t × p), G (p × p) and Q (t × l), all row-major. */

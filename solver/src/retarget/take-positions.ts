@@ -1,6 +1,7 @@
 // Posed vertex positions of a take at one shot frame: linear blend skinning of the rest mesh plus
 // the pose correctives plus the dynamic offsets (basis × morph weights). With gain 0 this is
-// skinning plus correctives only.
+// skinning plus correctives only. The correctives see the pose features clamped into the range
+// they were learned on.
 import { applyCorrectives, poseFeatures } from '../learn/pose-features.js';
 import { skinPositions } from '../rig/linear-blend.js';
 import {

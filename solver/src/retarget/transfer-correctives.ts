@@ -3,6 +3,7 @@
 // renamed through the joint map. Other topologies: each target vertex takes the map of its
 // nearest source corner (from the basis transfer), turned into the target's frame and scaled by
 // the size ratio. Slots whose joint has no target lose their features (their coefficients are 0).
+// Each joint's training range of features goes with it, so the target clamps where the source did.
 import type { JointMapping } from '../rig/joint-map.js';
 import type { Character, PoseCorrectives } from '../types.js';
 import type { TransferResult } from './transfer.js';
@@ -20,8 +21,9 @@ export function transferCorrectives(
   const n = target.restPositions.length / 3;
   const featureJoints = new Uint16Array(4 * n);
   const coefficients = new Float32Array(n * 3 * fpv);
+  const range = targetRange(correctives, mapping, target.skeleton.names.length);
   const src = correctives.coefficients;
-  if (src.length === 0) return { ...correctives, featureJoints, coefficients: new Float32Array(0) };
+  if (src.length === 0) return { ...correctives, ...range, featureJoints, coefficients: new Float32Array(0) }; // prettier-ignore
   for (let i = 0; i < n; i++) {
     const from = transfer.nearestSource ? transfer.nearestSource[i] : i;
     if (from < 0) continue;
@@ -42,5 +44,23 @@ export function transferCorrectives(
       }
     }
   }
-  return { ...correctives, featureJoints, coefficients };
+  return { ...correctives, ...range, featureJoints, coefficients };
+}
+
+/** The training range of each source joint's features moved to its target joint (unmapped: 0). */
+function targetRange(
+  correctives: PoseCorrectives,
+  mapping: JointMapping,
+  targetJoints: number,
+): Pick<PoseCorrectives, 'featureMin' | 'featureMax'> {
+  const { featureMin: lo, featureMax: hi } = correctives;
+  if (!lo || !hi) return {};
+  const featureMin = new Float64Array(targetJoints * 9);
+  const featureMax = new Float64Array(targetJoints * 9);
+  mapping.targetOf.forEach((t, j) => {
+    if (t < 0 || t >= targetJoints) return;
+    featureMin.set(lo.subarray(9 * j, 9 * j + 9), 9 * t);
+    featureMax.set(hi.subarray(9 * j, 9 * j + 9), 9 * t);
+  });
+  return { featureMin, featureMax };
 }

@@ -82,6 +82,26 @@ describe('overshoot-solve learn and modes', () => {
     expect((await readdir(dir)).filter((f) => f.startsWith('none'))).toEqual([]);
   }, 60_000);
 
+  it('starts the worker threads asked for and writes the same profile as without', async () => {
+    const learn = (threads: string, out: string) =>
+      run(['learn', '--character', join(dir, 'body.glb'), '--capture', join(dir, 'capture.glb'), '--out', join(dir, out), '--max-modes', '4', '--threads', threads, '--cutoff-hz', 'off']); // prettier-ignore
+    const [alone, pooled] = [await learn('0', 'alone.ovsp'), await learn('1', 'pooled.ovsp')];
+    expect(alone.code).toBe(0);
+    expect(pooled.code).toBe(0);
+    expect(JSON.parse(alone.stdout).threads).toBe(0);
+    expect(JSON.parse(pooled.stdout).threads).toBe(1);
+    expect(pooled.stderr).toContain('learn: 1 worker thread\n');
+    const bytes = await Promise.all(['alone', 'pooled'].map((f) => readFile(join(dir, `${f}.ovsp`)))); // prettier-ignore
+    expect(bytes[1].equals(bytes[0])).toBe(true);
+  }, 60_000);
+
+  it('exits 2 with BAD_ARGUMENTS and the usage for a thread count that is not a whole number ≥ 0', async () => {
+    const r = await run(['learn', '--character', 'a.glb', '--capture', 'b.glb', '--out', 'c', '--threads=-1']); // prettier-ignore
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/^BAD_ARGUMENTS: --threads must be an integer ≥ 0/);
+    expect(r.stderr).toContain('--threads N');
+  });
+
   it('exits 2 with NOT_A_PROFILE when modes is given another file', async () => {
     const r = await run(['modes', join(dir, 'body.glb')]);
     expect(r.code).toBe(2);

@@ -79,10 +79,10 @@ describe('corrective morph targets', () => {
   });
 
   it('keep every vertex within the reported error bound when the target count is capped', () => {
-    // Many active features: the randomized range finder and the Frobenius bound.
+    // Many active features: the randomized range finder.
     const many = randomCorrectives(character);
     const a = correctiveMorphs(many, character.skeleton, clip, { maxTargets: 3, tolerance: 0 });
-    // Nine active features of one joint: the exact path and the σ_{R+1} bound.
+    // Nine active features of one joint: the exact path.
     const one = randomCorrectives(character, 'spine');
     const b = correctiveMorphs(one, character.skeleton, clip, { maxTargets: 2, tolerance: 0 });
     for (const [m, corr] of [

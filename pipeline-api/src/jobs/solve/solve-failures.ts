@@ -31,7 +31,7 @@ export class JobReleased extends Error {
 /** What to do about each solver input error. */
 const ADVICE: Record<string, string> = {
   NO_MOTION:
-    'Learn from a capture with visible soft-tissue motion, or lower options.varianceTarget.',
+    'Learn from a capture in which the soft tissue visibly moves (lag, overshoot, settle after the limbs stop).',
   VERTEX_COUNT_MISMATCH: 'Learn the capture on the character it was registered to.',
   TRIANGLE_MISMATCH: 'Learn the capture on the character it was registered to.',
   NO_FRAMES: 'Upload a file with animation frames.',

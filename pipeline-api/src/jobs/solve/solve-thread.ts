@@ -13,8 +13,11 @@ import {
   readProfile,
   resampleClip,
   retarget,
+  startKernelThreads,
+  stopKernelThreads,
   writeProfile,
   writeTakeGlb,
+  type LearnResult,
 } from '@overshoot/solver';
 import type {
   LearnReply,
@@ -35,15 +38,39 @@ function send(message: ThreadMessage, transfer: ArrayBuffer[] = []): void {
 
 const progress = (stage: string, fraction: number) => send({ type: 'progress', stage, fraction });
 
+/**
+ * Kernel worker threads a learn adds for the solver's big products, from SOLVER_THREADS. Default
+ * 0: the worker already runs jobs concurrently, each in its own solve thread, and the 2-core
+ * machines it runs on have no spare core for more; raise it only where cores sit idle. Profiles
+ * are bit-identical whatever the count.
+ */
+function kernelThreads(): number {
+  const raw = process.env.SOLVER_THREADS?.trim();
+  if (!raw) return 0;
+  const n = Number(raw);
+  if (!Number.isInteger(n) || n < 0) {
+    throw new Error(`SOLVER_THREADS must be a whole number ≥ 0, not "${raw}"`);
+  }
+  return n;
+}
+
 async function learn(req: LearnRequest): Promise<LearnReply> {
   progress('read', 0);
+  const threads = kernelThreads();
   const character = await readCharacter(req.character);
   const capture = await readCapture(req.capture);
-  const result = learnProfile(character, capture, {
-    ...req.settings,
-    name: req.name,
-    onProgress: progress,
-  });
+  // Retargeting has no product big enough to split, so only a learn starts them.
+  if (threads > 0) await startKernelThreads({ threads });
+  let result: LearnResult;
+  try {
+    result = learnProfile(character, capture, {
+      ...req.settings,
+      name: req.name,
+      onProgress: progress,
+    });
+  } finally {
+    await stopKernelThreads();
+  }
   const { profile } = result;
   const shares = driverEnergyShares(profile.drivers, profile.dynamics);
   return {
@@ -73,7 +100,8 @@ async function retargetShot(req: RetargetRequest): Promise<RetargetReply> {
   const profile = readProfile(req.profile);
   const character = await readCharacter(req.character);
   const source = await readClip(req.clip, req.clipKind);
-  // Shot frame f is at time f / fps in the clip: resample to the shot rate, then cut the range.
+  // `frames` count from the clip's start at the shot's rate (shots/shot-frames.ts): resample to
+  // the shot rate, then cut the range.
   const clip = Math.abs(source.fps - req.fps) > 1e-9 ? resampleClip(source, req.fps) : source;
   const result = retarget(profile, character, clip, {
     controls: req.controls,

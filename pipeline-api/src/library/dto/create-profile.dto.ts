@@ -16,8 +16,10 @@ import { Trim } from '../../common/trim';
 /** Learning settings a caller may change; the solver's defaults apply to the rest. */
 export class LearnOptionsDto {
   @ApiPropertyOptional({
-    description: 'Low-pass cut-off (Hz) of the pose-driven fit (solver default 0.8).',
-    example: 0.8,
+    description:
+      'Low-pass cut-off (Hz) of the pose-driven fit. Solver default: off (the full band), which ' +
+      'was the most accurate once tissue motion is projected out before the fit.',
+    example: 3,
   })
   @IsOptional()
   @IsNumber({ allowNaN: false, allowInfinity: false })
@@ -25,9 +27,12 @@ export class LearnOptionsDto {
   @Max(30)
   cutoffHz?: number;
 
+  /** Accepted so that older clients are not refused; the solver no longer reads it. */
   @ApiPropertyOptional({
-    description: 'Share of dynamic variance the basis keeps (solver default 0.95).',
-    example: 0.95,
+    description:
+      'Ignored: the basis keeps every tissue direction found above the noise (capped by ' +
+      'maxModes), not a share of variance. Still accepted from older clients.',
+    deprecated: true,
   })
   @IsOptional()
   @IsNumber({ allowNaN: false, allowInfinity: false })
@@ -35,7 +40,12 @@ export class LearnOptionsDto {
   @Max(1)
   varianceTarget?: number;
 
-  @ApiPropertyOptional({ description: 'Most modes (solver default 32).', example: 16 })
+  @ApiPropertyOptional({
+    description:
+      'Cap on the basis size K: K is the number of tissue directions found, at most this ' +
+      '(solver default 32).',
+    example: 16,
+  })
   @IsOptional()
   @IsInt()
   @Min(1)
