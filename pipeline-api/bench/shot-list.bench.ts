@@ -7,6 +7,15 @@
 // milliseconds the API and the database spend per request (from /proc), and the machine's load
 // average. On a shared machine latency measures the other tenants too; CPU per request measures
 // only our code. Prints figures only.
+//
+// Figures on two shared cores (1,000 shots; p50 / p95 ms, API CPU ms per request):
+// - before the show check was cached and API paths skipped the web client's file lookup
+//   (load 7.7–8.6): paced p50 21–28, p95 389–581, API 7.5–8.0; saturated p50 403, p95 774–859,
+//   111–115 req/s, API 5.2–5.6; one client alone API 7.4–9.2; MariaDB 2.3–5.1.
+// - after (load 3.4–6.1): paced p50 6–10, p95 12–30, API 4.0–5.0; saturated p50 122–252, p95
+//   195–506, 176–374 req/s, API 2.4–3.6; one client alone API 3.0–6.5; MariaDB 1.3–3.5.
+// The machine was quieter for the second set, which flatters its latency; CPU per request moves
+// far less with the load and is the figure to compare.
 import { loadavg } from 'node:os';
 import autocannon from 'autocannon';
 import { fmt, latencyFigures } from './stats';

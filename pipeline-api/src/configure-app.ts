@@ -5,7 +5,7 @@ import helmet from 'helmet';
 import { Env } from './config/env.validation';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { createValidationPipe } from './common/validation';
-import { spaFallback } from './web/spa-fallback';
+import { serveWebClient } from './web/web-client';
 import { jsonBody } from './common/middleware/json-body';
 
 /** Options for creating the app: our own JSON parser answers unreadable bodies (see jsonBody). */
@@ -56,7 +56,6 @@ export function configureApp(app: NestExpressApplication): void {
   });
 
   if (env.WEB_DIST_DIR && existsSync(env.WEB_DIST_DIR)) {
-    app.useStaticAssets(env.WEB_DIST_DIR, { index: 'index.html', maxAge: '1h' });
-    app.use(spaFallback(env.WEB_DIST_DIR));
+    app.use(serveWebClient(env.WEB_DIST_DIR));
   }
 }

@@ -31,7 +31,9 @@ import { JobState } from '../src/jobs/job-state';
 import { ReviewState } from '../src/takes/review-state';
 import { demoShowId } from '../src/seed/seed-demo';
 import { createTestApp } from './app-factory';
-import { randomIp, sessionCookie } from './support/world';
+import { randomIp, sessionCookie, uniq, World } from './support/world';
+import { startWorker } from './support/worker-process';
+import { waitForJob } from './support/jobs';
 
 const cfg = stackConfig('test');
 const DB_NAME = `${cfg.mariadb.database}_demo`;
@@ -247,5 +249,59 @@ describe('demo seeder (setup.js --demo on an empty database)', () => {
     expect(again.report.demo).toBe('present');
     expect(again.stdout).toMatch(/demo show not loaded now/);
     expect(await snapshot()).toEqual(before);
+  }, 120_000);
+  it("lets a producer set a demo shot's due date, and re-solves it over the shot's frames", async () => {
+    // A worker of the spec's own on the demo database and bucket, on a queue prefix of its own.
+    const prefix = `${process.env.REDIS_PREFIX}-demo-${uniq()}`;
+    const own = { DB_NAME, S3_BUCKET: BUCKET, REDIS_PREFIX: prefix };
+    const worker = await startWorker('demo-resolve', own);
+    const app: NestExpressApplication = await createTestApp({ env: own });
+    try {
+      const signIns = first.report.signIns as { role: string; email: string; password: string }[];
+      const cookieOf = async (role: string) => {
+        const who = signIns.find((x) => x.role === role);
+        if (!who) throw new Error(`no demo ${role}`);
+        const res = await request(app.getHttpServer())
+          .post('/api/auth/sign-in')
+          .set('X-Forwarded-For', randomIp())
+          .send({ email: who.email, password: who.password });
+        return sessionCookie(res.headers['set-cookie']);
+      };
+      const em = orm.em.fork();
+      const [profile] = await em.find(TissueProfile, { show: showId });
+      const take = await em.findOneOrFail(
+        Take,
+        { show: showId, shot: { character: profile.character } },
+        { populate: ['shot'], orderBy: { version: 'desc' } },
+      );
+      const shot = take.shot;
+      expect(shot.frameStart).toBe(demo.shots[0].frameStart);
+      const api = (path: string) => `/api/shows/${showId}/shots/${shot.id}${path}`;
+
+      const due = await request(app.getHttpServer())
+        .patch(api(''))
+        .set('Cookie', await cookieOf('producer'))
+        .send({ dueDate: day(30) });
+      expect(due.status, JSON.stringify(due.body)).toBe(200);
+      expect(due.body.dueDate).toBe(day(30));
+
+      const artist = await cookieOf('technical artist');
+      const submitted = await request(app.getHttpServer())
+        .post(api('/jobs'))
+        .set('Cookie', artist)
+        .send({ profileId: profile.id, baseTakeId: take.id, controls: { gain: 0.8 } });
+      expect(submitted.status, JSON.stringify(submitted.body)).toBe(202);
+      const job = await waitForJob(new World(app), { cookie: artist }, showId, submitted.body.id);
+      expect(job, JSON.stringify(job)).toMatchObject({ state: 'solved', attempts: 1 });
+      const again = await em.fork().findOneOrFail(Take, job.takeId as string);
+      expect(again.version).toBe(take.version + 1);
+      const file = await readTakeGlb(await readObject(storage, again.files[0]));
+      expect(file.extras.frameCount).toBe(shot.frameEnd - shot.frameStart + 1);
+      expect(again.metrics?.frameCount).toBe(shot.frameEnd - shot.frameStart + 1);
+    } finally {
+      await app.close();
+      worker.child.kill('SIGTERM');
+      await worker.exited;
+    }
   }, 120_000);
 });

@@ -16,6 +16,7 @@ import { waitForJob } from './support/jobs';
 import { binary } from './support/job-setup';
 import { openEventStream, type EventStream } from './support/event-stream';
 import { startWorker, type WorkerProcess } from './support/worker-process';
+import { LEARN_SOLVER_STAGES, waitForRow as waitForJobRow } from './support/job-rows';
 import { Role } from '../src/users/entities/role';
 import { QUEUES } from '../src/queues/queue-names';
 import { StorageService } from '../src/storage/storage.service';
@@ -33,7 +34,6 @@ const WORKER_ENV = {
   SOLVE_STALLED_CHECK_MS: '1000',
   SOLVE_SHUTDOWN_GRACE_SECONDS: '0',
 };
-const SOLVER_STAGES = ['read', 'validate', 'poses', 'unpose', 'separate', 'subspace'];
 
 describe('a worker that dies or stops mid-job', () => {
   let app: NestExpressApplication;
@@ -52,18 +52,11 @@ describe('a worker that dies or stops mid-job', () => {
   };
 
   /** Polls the row until `done`, quickly: the moment to interrupt is short. */
-  async function waitForRow<T extends LearnJob | RetargetJob>(
+  const waitForRow = <T extends LearnJob | RetargetJob>(
     entity: new (...a: never[]) => T,
     id: string,
     done: (row: T) => boolean,
-  ): Promise<T> {
-    for (let i = 0; i < 3000; i++) {
-      const row = (await world.em().findOneOrFail(entity as never, id as never)) as T;
-      if (done(row)) return row;
-      await new Promise((r) => setTimeout(r, 20));
-    }
-    throw new Error(`job ${id} never reached the state wanted`);
-  }
+  ) => waitForJobRow(world, entity, id, done);
 
   /** The job's states, in the order the event stream told them. */
   async function statesUntilSolved(jobId: string): Promise<string[]> {
@@ -114,7 +107,9 @@ describe('a worker that dies or stops mid-job', () => {
     profileId = res.body.id;
     const jobId = res.body.job.id as string;
     // Killed while the solver thread learns.
-    const solving = await waitForRow(LearnJob, jobId, (j) => SOLVER_STAGES.includes(j.stage ?? ''));
+    const solving = await waitForRow(LearnJob, jobId, (j) =>
+      LEARN_SOLVER_STAGES.includes(j.stage ?? ''),
+    );
     first.child.kill('SIGKILL');
     await first.exited;
     expect(solving.state).toBe('solving');

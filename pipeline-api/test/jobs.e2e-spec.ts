@@ -115,9 +115,10 @@ describe('learn and retarget jobs', () => {
     for (const m of res.body.mapped) expect(m.target).toBe(m.source);
   });
 
-  it('retargets a shot at another rate into take v1, then v2: one take per job, files that read', async () => {
-    // The clip runs at 24 fps; the shot at 30: frame f of the shot is at f / 30 s in the clip.
-    const shot = await newShot(s, { frameStart: 5, frameEnd: 50, fps: 30 });
+  it('retargets a shot numbered from 1001 at another rate into take v1, then v2: one take per job, files that read', async () => {
+    // The clip runs at 24 fps; the shot at 30 from frame 1001: shot frame f is at (f − 1001) / 30
+    // s in the clip, so 1001–1046 is 46 frames from the clip's start.
+    const shot = await newShot(s, { frameStart: 1001, frameEnd: 1046, fps: 30 });
     const res = await submitJob(s, shot.id, { profileId, controls: { gain: 1.5 } });
     expect(res.status, JSON.stringify(res.body)).toBe(202);
     expect(res.body).toMatchObject({
@@ -145,6 +146,7 @@ describe('learn and retarget jobs', () => {
       .get(s.api(`/takes/${job.takeId}`))
       .set('Cookie', s.ta.cookie);
     expect(take.body).toMatchObject({ version: 1, jobId: job.id, solveState: 'solved' });
+    expect(take.body.metrics).toMatchObject({ frameCount: 1046 - 1001 + 1, fps: 30 });
     const file = await request(s.world.server)
       .get(s.api(`/takes/${job.takeId}/file`))
       .set('Cookie', s.animator.cookie)
@@ -153,7 +155,7 @@ describe('learn and retarget jobs', () => {
     expect(file.status).toBe(200);
     expect(file.headers['content-type']).toBe('model/gltf-binary');
     const read = await readTakeGlb(new Uint8Array(file.body as Buffer));
-    expect(read.extras.frameCount).toBe(46);
+    expect(read.extras.frameCount).toBe(1046 - 1001 + 1);
     expect(read.extras.fps).toBe(30);
     expect(read.extras.controls.gain).toBe(1.5);
 

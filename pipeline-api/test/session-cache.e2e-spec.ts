@@ -1,5 +1,6 @@
-// Sessions a process looked up a moment ago are reused for a few seconds (auth/session-cache.ts);
-// ending a session must still take effect at once in that process.
+// Sessions a process looked up a moment ago are reused for a few seconds (auth/session-cache.ts),
+// and so are show checks that passed (shows/show-access-cache.ts); ending a session or removing a
+// member must still take effect at once in that process.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import type { NestExpressApplication } from '@nestjs/platform-express';
@@ -43,12 +44,14 @@ describe('session lookups reused for a few seconds', () => {
     expect((await me(cookie)).status).toBe(401);
   });
 
-  it('still checks show membership on every request of a reused session', async () => {
+  it('drops a removed member’s show access at once, though session and show check were reused', async () => {
     const show = await world.show();
     const { email, user } = await world.user(Role.Animator, [show]);
     const cookie = await world.signIn(email);
     const shots = () =>
       request(world.server).get(`/api/shows/${show.id}/shots`).set('Cookie', cookie);
+    expect((await shots()).status).toBe(200);
+    // Reused: the same session and the same show check, both cached a moment ago.
     expect((await shots()).status).toBe(200);
     const admin = await world.admin();
     const removed = await request(world.server)

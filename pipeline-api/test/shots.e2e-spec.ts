@@ -6,6 +6,7 @@ import { World, type TestUser } from './support/world';
 import { library } from './support/production';
 import { Role } from '../src/users/entities/role';
 import { Shot } from '../src/shots/entities/shot.entity';
+import { Clip } from '../src/library/entities/clip.entity';
 import { TokenScope } from '../src/tokens/token-scope';
 import type { Show } from '../src/shows/entities/show.entity';
 
@@ -103,6 +104,59 @@ describe('shots: create and edit with checks, render state', () => {
     const reversed = await create({ ...base(), frameStart: 50, frameEnd: 10 });
     expect(reversed.body.code).toBe('SHOT_FRAME_RANGE_INVALID');
     expect(await count()).toBe(before + 1);
+  });
+
+  it("numbers a shot from any first frame: frame 1001 is the clip's first instant", async () => {
+    // 600 clip frames at 60 fps are 0 … 599: a shot at 60 fps from 1001 can reach 1001 + 599.
+    const long = await library(world, show.id, ta.user, { frames: 600, fps: 60 });
+    const from1001 = (frameEnd: number) =>
+      create({ ...base(), clipId: long.clipId, fps: 60, frameStart: 1001, frameEnd });
+    const fits = await from1001(1100);
+    expect(fits.status, JSON.stringify(fits.body)).toBe(201);
+    expect(fits.body).toMatchObject({ frameStart: 1001, frameEnd: 1100 });
+    expect((await from1001(1600)).status).toBe(201);
+    const before = await count();
+    const past = await from1001(1700);
+    expect(past.status).toBe(400);
+    expect(past.body).toMatchObject({
+      code: 'SHOT_FRAME_RANGE_INVALID',
+      details: { frameStart: 1001, frameEnd: 1700, lastFrame: 1600, clipFrames: 600 },
+    });
+    expect(past.body.message).toContain('shot frame 1600');
+    expect((await from1001(1601)).body.code).toBe('SHOT_FRAME_RANGE_INVALID');
+    expect(await count()).toBe(before);
+  });
+
+  it('checks the range again only when the range, fps or clip changes, not for a due date', async () => {
+    const clip = await library(world, show.id, ta.user, { frames: 600, fps: 60 });
+    const shot = (
+      await create({
+        ...base(),
+        clipId: clip.clipId,
+        fps: 60,
+        frameStart: 1001,
+        frameEnd: 1100,
+      })
+    ).body;
+    const patch = (body: object, cookie: string) =>
+      request(world.server)
+        .patch(url(`/${shot.id}`))
+        .set('Cookie', cookie)
+        .send(body);
+    expect((await patch({ dueDate: '2031-02-01' }, producer)).status).toBe(200);
+    // The clip row now says 50 frames (e.g. replaced by a shorter cut): the stored range no
+    // longer fits, yet a producer still sets the due date and assignees.
+    await world.em().nativeUpdate(Clip, { id: clip.clipId }, { frameCount: 50 });
+    const due = await patch({ dueDate: '2031-03-01', assigneeIds: [animator.user.id] }, producer);
+    expect(due.status, JSON.stringify(due.body)).toBe(200);
+    expect(due.body).toMatchObject({ dueDate: '2031-03-01', frameStart: 1001, frameEnd: 1100 });
+    // Touching the range checks it against the clip as it is now (50 frames: up to 1001 + 49).
+    const range = await patch({ frameEnd: 1060 }, ta.cookie);
+    expect(range.body).toMatchObject({
+      code: 'SHOT_FRAME_RANGE_INVALID',
+      details: { lastFrame: 1050 },
+    });
+    expect((await patch({ frameEnd: 1050 }, ta.cookie)).status).toBe(200);
   });
 
   it('refuses an assignee who is not a member of the show', async () => {

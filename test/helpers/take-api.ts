@@ -89,7 +89,7 @@ export class ApiSession {
       const start = (part.partNumber - 1) * created.partSize;
       const res = await fetch(part.url, {
         method: 'PUT',
-        body: file.bytes.subarray(start, start + created.partSize),
+        body: file.bytes.slice(start, start + created.partSize),
       });
       if (!res.ok)
         throw new ApiCallError(res.status, await res.text(), `PUT part ${part.partNumber}`);

@@ -25,6 +25,9 @@ export interface TakeWorld {
   people: Record<TakeRole, { email: string; password: string; session: ApiSession }>;
 }
 
+/** The first frame of the world's shot (the last is 599 frames later). */
+export const TAKE_WORLD_FIRST_FRAME = 1001;
+
 async function invite(admin: ApiSession, showId: string, role: TakeRole) {
   const email = `${role.replace('_', '-')}.${uniq()}@example.test`;
   await admin.call('POST', '/admin/invitations', { email, role, showIds: [showId] });
@@ -149,8 +152,9 @@ export async function makeTakeWorld(): Promise<TakeWorld> {
   ).then((p) => {
     if (p.state !== 'ready') throw new Error(`learning failed: ${JSON.stringify(p)}`);
   });
-  // The whole 600-frame demo clip at its own 60 fps (shot frames are the clip's frames).
-  const [frameStart, frameEnd] = [0, 599];
+  // The whole 600-frame demo clip at its own 60 fps, numbered as shots commonly are (from 1001),
+  // so the browser tests also prove the player counts in shot frames.
+  const [frameStart, frameEnd] = [TAKE_WORLD_FIRST_FRAME, TAKE_WORLD_FIRST_FRAME + 599];
   const shot = await ta.call<{ id: string }>('POST', `/shows/${show.id}/shots`, {
     sequence: 'SQ010',
     code: `SQ010_${uniq().toUpperCase()}`,

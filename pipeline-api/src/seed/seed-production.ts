@@ -3,6 +3,7 @@
 // the review notes; and the supervisor's decisions the notes imply.
 import { resolveControls } from '@overshoot/solver';
 import { Shot } from '../shots/entities/shot.entity';
+import { lastShotFrame, shotClipFrames } from '../shots/shot-frames';
 import { RetargetJob } from '../jobs/entities/retarget-job.entity';
 import { JobState } from '../jobs/job-state';
 import { runInThread } from '../jobs/solve/run-in-thread';
@@ -26,7 +27,16 @@ export function seedShots(ctx: SeedContext): Map<string, Shot> {
     const where = `shots[${i}]`;
     const shot = new Shot(ctx.show, s);
     shot.character = demoItem(ctx.characters, s.character, 'the character', where).row;
-    shot.clip = demoItem(ctx.clips, s.clip, 'the clip', where).row;
+    const clip = demoItem(ctx.clips, s.clip, 'the clip', where).row;
+    shot.clip = clip;
+    // The same rule as the shot routes: the range must lie inside the clip.
+    const last = clip.frameCount && clip.fps ? lastShotFrame(s, clip.frameCount, clip.fps) : null;
+    if (last !== null && s.frameEnd > last) {
+      throw new DemoDataError(
+        `frameEnd ${s.frameEnd} is past the clip's end (frame ${last})`,
+        where,
+      );
+    }
     shot.assignees.set(s.assignees.map((e, j) => demoUser(ctx, e, `${where}.assignees[${j}]`)));
     shot.dueDate = dayFrom(ctx.now, s.dueInDays);
     ctx.em.persist(shot);
@@ -53,12 +63,6 @@ export function takePlan(ctx: SeedContext, profileCharacter: string): Map<string
   }
   return plan;
 }
-
-/**
- * The clip frames a shot covers, at the shot rate: its first frame is the clip's first (the demo
- * numbers shots from 1001, as film pipelines commonly do, with clips starting at their frame 0).
- */
-export const shotClipFrames = (s: DemoShot): [number, number] => [0, s.frameEnd - s.frameStart];
 
 /** Solves the planned takes of each shot with the profile; returns every take by shot code. */
 export async function seedTakes(

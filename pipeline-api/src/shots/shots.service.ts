@@ -15,6 +15,7 @@ import { characterNotFound, clipNotFound } from '../library/library-errors';
 import { Shot } from './entities/shot.entity';
 import { assertRenderTransition, type RenderState } from './render-state';
 import { shotView, type ShotView } from './shot-view';
+import { lastShotFrame } from './shot-frames';
 import { shotRange } from './shot-rows';
 import type { CreateShotDto, UpdateShotDto } from './dto/shot-fields.dto';
 import type { ListShotsQuery } from './dto/list-shots.query';
@@ -29,6 +30,9 @@ export interface ShotPage {
 
 /** Fields a producer may change (product.md: set due dates and assignees). */
 const PRODUCER_FIELDS = ['dueDate', 'assigneeIds'];
+
+/** Fields that move the shot's frames within its clip: changing one checks the range again. */
+const RANGE_FIELDS = ['frameStart', 'frameEnd', 'fps', 'clipId'];
 
 /** No such shot in the show. */
 export const shotNotFound = (id: string) =>
@@ -110,8 +114,12 @@ export class ShotsService {
     if (body.assigneeIds !== undefined)
       shot.assignees.set(await this.members(showId, body.assigneeIds));
     if (body.dueDate !== undefined) shot.dueDate = body.dueDate;
-    if (shot.clip) await this.em.populate(shot, ['clip']);
-    checkRange(shot);
+    // The range is checked only when it or the clip changes: a stored range passed when it was
+    // set, and a due date or an assignee must stay editable whatever the clip holds now.
+    if (RANGE_FIELDS.some((k) => given.includes(k))) {
+      if (shot.clip) await this.em.populate(shot, ['clip']);
+      checkRange(shot);
+    }
     this.audit.add(this.em, actor, {
       action: 'shot.updated',
       objectType: 'shot',
@@ -221,8 +229,8 @@ export class ShotsService {
 }
 
 /**
- * The frame range must be non-empty and, with a clip, inside it: shot frame f is at time f / fps
- * in the clip, whose frames 0 … frameCount − 1 run at the clip's own rate.
+ * The frame range must be non-empty and, with a clip, inside it (`shot-frames.ts` says how a
+ * shot's frames sit in its clip). Messages and details speak in shot frames.
  */
 function checkRange(shot: Shot): void {
   const bad = (message: string, details: Record<string, unknown>) =>
@@ -234,11 +242,10 @@ function checkRange(shot: Shot): void {
   if (shot.frameEnd < shot.frameStart) throw bad('frameEnd comes before frameStart.', {});
   const clip = shot.clip;
   if (!clip || !clip.frameCount || !clip.fps) return;
-  const clipSeconds = (clip.frameCount - 1) / clip.fps;
-  const lastFrame = Math.floor(clipSeconds * shot.fps + 1e-6);
+  const lastFrame = lastShotFrame(shot, clip.frameCount, clip.fps);
   if (shot.frameEnd > lastFrame) {
     throw bad(
-      `The clip ends at shot frame ${lastFrame} (${clip.frameCount} frames at ${clip.fps} fps).`,
+      `The clip ends at shot frame ${lastFrame} (${clip.frameCount} frames at ${clip.fps} fps, from shot frame ${shot.frameStart}): end the shot at frame ${lastFrame} or earlier, or pick a longer clip.`,
       {
         clipFrames: clip.frameCount,
         clipFps: clip.fps,

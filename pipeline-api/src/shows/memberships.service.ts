@@ -6,7 +6,7 @@ import type { Principal } from '../auth/principal';
 import { User } from '../users/entities/user.entity';
 import { Show } from './entities/show.entity';
 import { Membership } from './entities/membership.entity';
-import { showNotFound } from './show-access.service';
+import { ShowAccessService, showNotFound } from './show-access.service';
 
 /** Adds people to shows and removes them (admin). */
 @Injectable()
@@ -14,6 +14,7 @@ export class MembershipsService {
   constructor(
     private readonly em: EntityManager,
     private readonly audit: AuditService,
+    private readonly showAccess: ShowAccessService,
   ) {}
 
   /** Makes a user a member of a show. */
@@ -69,5 +70,7 @@ export class MembershipsService {
       ip,
     });
     await this.em.flush();
+    // The member's next request in this process is checked again, not let in from the cache.
+    this.showAccess.forgetAll();
   }
 }

@@ -9,6 +9,7 @@ import { ClipFormat } from '../../library/entities/clip.entity';
 import { ProfileState } from '../../library/entities/tissue-profile.entity';
 import { TakesService } from '../../takes/takes.service';
 import type { Take } from '../../takes/entities/take.entity';
+import { shotClipFrames } from '../../shots/shot-frames';
 import { RetargetJob } from '../entities/retarget-job.entity';
 import { RETARGET_JOBS } from '../job-kinds';
 import type { SolveJobData, SolveOutcome } from '../solve-queue';
@@ -106,7 +107,7 @@ export class RetargetRunner {
         clipKind: clip.format === ClipFormat.Bvh ? 'bvh' : 'gltf',
         controls: row.controls,
         jointMap: row.jointMap ?? null,
-        frames: [shot.frameStart, shot.frameEnd],
+        frames: shotClipFrames(shot),
         fps: shot.fps,
       },
       (stage, fraction) => attempt.progress(stage, 5 + 80 * fraction),

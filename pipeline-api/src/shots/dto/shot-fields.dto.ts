@@ -36,7 +36,7 @@ export class CreateShotDto {
 
   @ApiProperty({
     description:
-      'First frame. Frame f of the shot is at time f / fps in the clip, whose first frame is 0; the range must lie inside the clip.',
+      "First frame, any number (e.g. 1001). The first frame is the clip's first instant: frame f is at (f − frameStart) / fps seconds into the clip; the range must lie inside the clip.",
   })
   @IsInt()
   @Min(0)
@@ -95,7 +95,10 @@ export class UpdateShotDto {
   @Matches(CODE, { message: `code ${CODE_MESSAGE}` })
   code?: string;
 
-  @ApiPropertyOptional()
+  @ApiPropertyOptional({
+    description:
+      'Changing the range, fps or clip checks the range against the clip again; other edits do not.',
+  })
   @IsOptional()
   @IsInt()
   @Min(0)
