@@ -14,10 +14,11 @@ import {
   viewportCanvas,
   waitForRender,
 } from '../helpers/take-page.ts';
-import { makeTakeWorld, type TakeWorld } from '../helpers/take-world.ts';
+import { makeTakeWorld, TAKE_WORLD_FIRST_FRAME, type TakeWorld } from '../helpers/take-world.ts';
 
-// A frame well inside the shot, where the demo clip moves and the tissue swings.
-const FRAME = 400;
+// A shot frame well inside the shot (the clip's 400th frame), where the demo clip moves and the
+// tissue swings.
+const FRAME = TAKE_WORLD_FIRST_FRAME + 400;
 
 describe('take player: animator', () => {
   let world: TakeWorld;
@@ -53,6 +54,38 @@ describe('take player: animator', () => {
     await expect.poll(() => page.getByTestId('note-form').count()).toBe(1);
     await expect.poll(() => page.getByTestId('review-state').textContent()).toBe('Awaiting review');
     await page.screenshot({ path: join(ARTIFACTS_DIR, 'take-player.png'), fullPage: true });
+  });
+
+  it('gives the view the window’s width, with the controls and review beside it on a wide screen', async () => {
+    const { page } = browser;
+    const box = async (testId: string) => {
+      const b = await page.getByTestId(testId).boundingBox();
+      if (!b) throw new Error(`${testId} has no box`);
+      return b;
+    };
+    // 1280 × 800: the view spans the page, less its margins; the panels come under it.
+    const narrow = await box('take-viewport');
+    expect(narrow.width).toBeGreaterThan(1280 - 80);
+    expect((await box('controls-panel')).y).toBeGreaterThan(narrow.y + narrow.height);
+
+    const renders = await renderCount(page);
+    await page.setViewportSize({ width: 1920, height: 1080 });
+    try {
+      // The view draws again at its new size.
+      await waitForRender(page, renders);
+      await expect.poll(async () => (await box('take-viewport')).width).toBeGreaterThan(1300);
+      const wide = await box('take-viewport');
+      const controls = await box('controls-panel');
+      const review = await box('review-panel');
+      expect(controls.x).toBeGreaterThan(wide.x + wide.width);
+      expect(review.x).toBe(controls.x);
+      // The transport stays in sight under the view without scrolling.
+      const transport = await box('transport');
+      expect(transport.y + transport.height).toBeLessThan(1080);
+      await page.screenshot({ path: join(ARTIFACTS_DIR, 'take-player-1920.png'), fullPage: true });
+    } finally {
+      await page.setViewportSize({ width: 1280, height: 800 });
+    }
   });
 
   it('changes the view while the gain moves, and back again', async () => {
@@ -108,7 +141,36 @@ describe('take player: animator', () => {
     expect(scale).toBeGreaterThan(0);
     await waitForRender(page, beforeHeat);
     await page.screenshot({ path: join(ARTIFACTS_DIR, 'take-heatmap.png'), fullPage: true });
-    await page.keyboard.press('h'); // the heat map shortcut turns it off again
+    // The shortcut list ("?") names the heat map's key; pressing it does what the list says.
+    await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
+    await page.keyboard.press('?');
+    const list = page.getByTestId('shortcuts-dialog');
+    await list.waitFor();
+    // The picture once the dialog has finished opening.
+    await page.waitForFunction(() =>
+      document.getAnimations().every((a) => a.playState !== 'running'),
+    );
+    await page.screenshot({ path: join(ARTIFACTS_DIR, 'shortcuts.png') });
+    const row = list.getByTestId('shortcut-toggleHeatMap');
+    await expect.poll(() => row.textContent()).toContain('Heat map on or off');
+    const key = (await row.getByTestId('shortcut-key').textContent()) ?? '';
+    expect(key).toMatch(/^[A-Z]$/);
+    await page.keyboard.press('Escape');
+    await list.waitFor({ state: 'detached' });
+    await page.keyboard.press(key.toLowerCase());
+    await legend.waitFor({ state: 'detached' });
+    await expect
+      .poll(() => page.getByTestId('heat-map-switch').getAttribute('aria-checked'))
+      .toBe('false');
+    // The key after "g" belongs to the "go" sequence and never reaches the player: after "g" and
+    // the heat map's key, one more press turns the heat map on (it would be off again otherwise).
+    await page.keyboard.press('g');
+    await page.keyboard.press(key.toLowerCase());
+    await page.keyboard.press(key.toLowerCase());
+    await expect
+      .poll(() => page.getByTestId('heat-map-switch').getAttribute('aria-checked'))
+      .toBe('true');
+    await page.keyboard.press(key.toLowerCase());
     await legend.waitFor({ state: 'detached' });
   });
 

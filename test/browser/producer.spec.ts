@@ -1,6 +1,8 @@
 import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openBrowser, type TestBrowser } from '../helpers/browser.ts';
+import { ARTIFACTS_DIR } from '../helpers/env.ts';
 import {
   ADMIN,
   createShow,
@@ -51,11 +53,23 @@ function parseCsv(text: string): string[][] {
 }
 
 interface ShotRow {
+  id: string;
   code: string;
   sequence: string;
   dueDate: string | null;
   late: boolean;
+  renderState: string;
   assignees: { displayName: string }[];
+}
+
+/** The CSV the export button downloads, as rows keyed by the header's column names. */
+async function downloadCsv(page: TestBrowser['page']): Promise<Record<string, string>[]> {
+  const [download] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByTestId('export-csv').click(),
+  ]);
+  const [header, ...body] = parseCsv(readFileSync(await download.path(), 'utf8'));
+  return body.map((r) => Object.fromEntries(header.map((name, i) => [name, r[i]])));
 }
 
 describe('tracking for a producer in Chromium', () => {
@@ -185,6 +199,64 @@ describe('tracking for a producer in Chromium', () => {
       .getByTestId('shot-row')
       .evaluateAll((rows) => rows.map((r) => r.getAttribute('data-code')));
     expect(shown).toEqual(api.items.map((s) => s.code));
+    expect(browser.consoleErrors).toEqual([]);
+    expect(realFailures(browser.failedRequests)).toEqual([]);
+  });
+
+  it('sets a past due date, assignees and the render state of a shot from its row, finds it among the late shots, and exports it as the API has it', async () => {
+    const { page } = browser;
+    const code = onTime[0].code;
+    const past = dayFromToday(-2);
+    const row = page.locator(`[data-testid="shot-row"][data-code="${code}"]`);
+    await row.getByRole('button', { name: `Update… ${code}` }).click();
+    const dialog = page.getByTestId('shot-plan-dialog');
+    await dialog.getByLabel('Due date').fill(past);
+    await dialog.getByText(/^In the past: the shot counts as late/).waitFor();
+    await dialog.getByRole('checkbox', { name: 'Paz Producer' }).click();
+    // The dialog is over the page: the window's picture, not the whole page's.
+    await page.evaluate(() => document.fonts.ready);
+    await page.waitForFunction(() =>
+      document.getAnimations().every((a) => a.playState !== 'running'),
+    );
+    await page.screenshot({ path: join(ARTIFACTS_DIR, 'tracking-update.png') });
+    await dialog.getByRole('button', { name: 'Save' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    await row.getByText('Late by 2 days', { exact: true }).waitFor();
+    await page.getByTestId('count-late').filter({ hasText: '4' }).waitFor();
+
+    await page.getByTestId('filter-late').click();
+    await page.getByTestId('table-range').filter({ hasText: 'of 4' }).waitFor();
+    const shown = await page
+      .getByTestId('shot-row')
+      .evaluateAll((rows) => rows.map((r) => r.getAttribute('data-code')));
+    expect(shown).toContain(code);
+
+    // Render state by hand: the dialog offers the moves from "Not started", i.e. Queued.
+    await row.getByRole('button', { name: `Update… ${code}` }).click();
+    await dialog.getByRole('radio', { name: 'Queued' }).click();
+    await dialog.getByRole('button', { name: 'Save' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    await page.getByTestId('count-render-queued').filter({ hasText: '1' }).waitFor();
+    await row.getByText('Queued', { exact: true }).waitFor();
+    await screenshot(page, 'tracking-updated');
+
+    const api = await producer.api.call<{ items: ShotRow[] }>(
+      'GET',
+      `/shows/${show.id}/shots?late=true&pageSize=200`,
+    );
+    const shot = api.items.find((s) => s.code === code);
+    expect(shot).toMatchObject({ dueDate: past, late: true, renderState: 'queued' });
+    expect(shot?.assignees.map((a) => a.displayName)).toEqual(['Paz Producer', 'Tam Artist']);
+
+    const csv = await downloadCsv(page);
+    expect(csv.map((r) => r.code).sort()).toEqual(api.items.map((s) => s.code).sort());
+    expect(csv.find((r) => r.code === code)).toMatchObject({
+      sequence: shot?.sequence,
+      due_date: shot?.dueDate,
+      late: 'yes',
+      render_state: shot?.renderState,
+      assignees: shot?.assignees.map((a) => a.displayName).join('; '),
+    });
     expect(browser.consoleErrors).toEqual([]);
     expect(realFailures(browser.failedRequests)).toEqual([]);
   });

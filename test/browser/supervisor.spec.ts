@@ -5,10 +5,12 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openBrowser, type TestBrowser } from '../helpers/browser.ts';
 import { ARTIFACTS_DIR } from '../helpers/env.ts';
+import { realFailures } from '../helpers/studio-page.ts';
 import { signInAndOpen, waitForRender } from '../helpers/take-page.ts';
-import { makeTakeWorld, type TakeWorld } from '../helpers/take-world.ts';
+import { makeTakeWorld, TAKE_WORLD_FIRST_FRAME, type TakeWorld } from '../helpers/take-world.ts';
 
-const NOTE_FRAME = 420;
+// A shot frame (the clip's 420th frame; the shot starts at 1001).
+const NOTE_FRAME = TAKE_WORLD_FIRST_FRAME + 420;
 
 interface ApiNote {
   frame: number;
@@ -99,6 +101,15 @@ describe('take review: supervisor', () => {
     await expect
       .poll(() => page.getByTestId('frame-counter').textContent())
       .toBe(String(NOTE_FRAME + 11));
+    // "P" goes back to the previous note's frame, as the shortcut list says.
+    await page.keyboard.press('p');
+    await expect
+      .poll(() => page.getByTestId('frame-counter').textContent())
+      .toBe(String(NOTE_FRAME));
+    await page.keyboard.press('.');
+    await expect
+      .poll(() => page.getByTestId('frame-counter').textContent())
+      .toBe(String(NOTE_FRAME + 1));
 
     await page.getByRole('link', { name: `Go to frame ${NOTE_FRAME}` }).click();
     await expect
@@ -142,7 +153,14 @@ describe('take review: supervisor', () => {
       `/shows/${world.showId}/takes/${world.takeId}`,
     );
     expect(take.reviewState).toBe('approved');
+
+    // "G" then "H" leaves the player for the list of shows.
+    await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
+    await page.keyboard.press('g');
+    await page.keyboard.press('h');
+    await page.waitForURL((url) => url.pathname === '/shows');
     expect(browser.consoleErrors).toEqual([]);
-    expect(browser.failedRequests).toEqual([]);
+    // Leaving the player closes its live event stream on purpose (net::ERR_ABORTED).
+    expect(realFailures(browser.failedRequests)).toEqual([]);
   });
 });

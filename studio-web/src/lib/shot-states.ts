@@ -47,3 +47,16 @@ export const NO_STATE_WORD = 'None yet';
 export function isOneOf<T extends string>(states: readonly T[], value: unknown): value is T {
   return typeof value === 'string' && (states as readonly string[]).includes(value);
 }
+
+/**
+ * Where a render state may go next, as the API allows it (it refuses any other move with
+ * RENDER_STATE_INVALID_TRANSITION): the forward path, a queued render taken back, and a failed
+ * or finished render queued again.
+ */
+export const RENDER_MOVES: Record<RenderState, readonly RenderState[]> = {
+  not_started: ['queued'],
+  queued: ['rendering', 'not_started'],
+  rendering: ['rendered', 'failed'],
+  rendered: ['queued'],
+  failed: ['queued'],
+};

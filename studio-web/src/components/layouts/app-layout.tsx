@@ -1,6 +1,6 @@
 import { Box, Button, Container, Flex, Text } from '@radix-ui/themes';
-import { useCallback, useMemo, useState } from 'react';
-import { Link, Outlet, useMatch } from 'react-router-dom';
+import { useCallback, useMemo, useState, type ReactNode } from 'react';
+import { Link, Outlet, useMatch, useMatches, useNavigate } from 'react-router-dom';
 import { Logo } from '@/components/ui/logo';
 import { paths } from '@/config/paths';
 import { isUnauthenticated } from '@/lib/query-client';
@@ -9,9 +9,45 @@ import { UserMenu } from '@/features/auth/components/user-menu';
 import { ShowPicker } from '@/features/shows/components/show-picker';
 import { useShowIdParam } from '@/features/shows/hooks/use-current-show';
 import { MainNav } from './main-nav';
-import { navItems } from './nav-items';
+import { navItems, navTargets, type NavItem } from './nav-items';
 import { ShortcutsDialog } from './shortcuts-dialog';
-import { useShellShortcuts } from './use-shell-shortcuts';
+import {
+  ShortcutsProvider,
+  useShortcutHandlers,
+  type ShortcutHandlers,
+} from './shortcuts-provider';
+
+/** A route's `handle` may ask for the whole window width (the take player does). */
+export interface LayoutHandle {
+  wide?: boolean;
+}
+
+/** Registers the "go" shortcuts of the links the user has. */
+function NavShortcuts({ items }: { items: NavItem[] }) {
+  const navigate = useNavigate();
+  const handlers = useMemo(() => {
+    const out: ShortcutHandlers = {};
+    for (const [command, href] of Object.entries(navTargets(items, paths.shows.getHref()))) {
+      out[command as keyof ShortcutHandlers] = () => void navigate(href);
+    }
+    return out;
+  }, [items, navigate]);
+  useShortcutHandlers(handlers);
+  return null;
+}
+
+/** The page's width: the usual column, or the whole window less a margin for wide pages. */
+function PageWidth({ wide, children }: { wide: boolean; children: ReactNode }) {
+  return wide ? (
+    <Box px={{ initial: '4', md: '6' }} className="page-wide">
+      {children}
+    </Box>
+  ) : (
+    <Container size="4" px="4">
+      {children}
+    </Container>
+  );
+}
 
 /** Page frame: the header with the mark, show, navigation and user, then the current page. */
 export function AppLayout() {
@@ -23,44 +59,49 @@ export function AppLayout() {
   const items = useMemo(() => navItems(user?.role, showId), [user?.role, showId]);
   const [helpOpen, setHelpOpen] = useState(false);
   const openHelp = useCallback(() => setHelpOpen(true), []);
-  useShellShortcuts(items, openHelp, user !== undefined);
+  const wide = useMatches().some((m) => (m.handle as LayoutHandle | undefined)?.wide === true);
 
   return (
-    <Flex direction="column" minHeight="100vh">
-      <a href="#main" className="skip-link">
-        Skip to content
-      </a>
-      <header className="app-header">
-        <Container size="4" px="4">
-          <Flex align="center" gap="5" height="56px">
-            <Link to={paths.home.getHref()} className="brand-link" aria-label="Overshoot, home">
-              <Flex align="center" gap="2">
-                <Logo size={26} />
-                <Text size="4" weight="bold">
-                  Overshoot
-                </Text>
-              </Flex>
-            </Link>
-            {user ? <ShowPicker showId={showId} /> : null}
-            <MainNav items={items} />
-            <Box flexGrow="1" />
-            {user ? <UserMenu user={user} onShowShortcuts={openHelp} /> : null}
-            {!user && !me.isPending && !onSignIn ? (
-              <Button asChild variant="soft">
-                <Link to={paths.signIn.getHref()}>Sign in</Link>
-              </Button>
-            ) : null}
-          </Flex>
-        </Container>
-      </header>
-      <Box asChild flexGrow="1">
-        <main id="main" tabIndex={-1}>
-          <Container size="4" px="4" py="6">
-            <Outlet />
-          </Container>
-        </main>
-      </Box>
-      <ShortcutsDialog open={helpOpen} onOpenChange={setHelpOpen} />
-    </Flex>
+    <ShortcutsProvider enabled={user !== undefined} onHelp={openHelp}>
+      {user ? <NavShortcuts items={items} /> : null}
+      <Flex direction="column" minHeight="100vh">
+        <a href="#main" className="skip-link">
+          Skip to content
+        </a>
+        <header className="app-header">
+          <PageWidth wide={wide}>
+            <Flex align="center" gap="5" height="56px">
+              <Link to={paths.home.getHref()} className="brand-link" aria-label="Overshoot, home">
+                <Flex align="center" gap="2">
+                  <Logo size={26} />
+                  <Text size="4" weight="bold">
+                    Overshoot
+                  </Text>
+                </Flex>
+              </Link>
+              {user ? <ShowPicker showId={showId} /> : null}
+              <MainNav items={items} />
+              <Box flexGrow="1" />
+              {user ? <UserMenu user={user} onShowShortcuts={openHelp} /> : null}
+              {!user && !me.isPending && !onSignIn ? (
+                <Button asChild variant="soft">
+                  <Link to={paths.signIn.getHref()}>Sign in</Link>
+                </Button>
+              ) : null}
+            </Flex>
+          </PageWidth>
+        </header>
+        <Box asChild flexGrow="1">
+          <main id="main" tabIndex={-1}>
+            <PageWidth wide={wide}>
+              <Box py="6">
+                <Outlet />
+              </Box>
+            </PageWidth>
+          </main>
+        </Box>
+        <ShortcutsDialog open={helpOpen} onOpenChange={setHelpOpen} />
+      </Flex>
+    </ShortcutsProvider>
   );
 }

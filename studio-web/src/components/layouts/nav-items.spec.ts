@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { navItems } from './nav-items';
+import { navItems, navTargets } from './nav-items';
 
 const keys = (...args: Parameters<typeof navItems>) => navItems(...args).map((i) => i.key);
 
@@ -30,5 +30,19 @@ describe('navItems', () => {
   it('links into the chosen show', () => {
     const tracking = navItems('producer', 'abc').find((i) => i.key === 'tracking');
     expect(tracking?.href).toBe('/shows/abc/tracking');
+  });
+
+  it('leads the "go" shortcuts to the role’s own links only', () => {
+    expect(navTargets(navItems('producer', 's1'), '/shows')).toEqual({
+      goShows: '/shows',
+      goLibrary: '/shows/s1/library',
+      goShots: '/shows/s1/shots',
+      goTracking: '/shows/s1/tracking',
+    });
+    expect(navTargets(navItems('animator', 's1'), '/shows').goTracking).toBeUndefined();
+    expect(navTargets(navItems('admin', undefined), '/shows')).toEqual({
+      goShows: '/shows',
+      goAdmin: '/admin/users',
+    });
   });
 });

@@ -1,5 +1,6 @@
 // What the main navigation offers a role, in order. Pure, so the rule is tested on its own.
 import { paths } from '@/config/paths';
+import type { ShortcutCommand } from '@/config/shortcuts';
 import { can, type Role } from '@/features/auth/permissions';
 
 /** One link of the main navigation. */
@@ -10,8 +11,8 @@ export interface NavItem {
   /** Route pattern that marks the link as the current page. */
   match: string;
   href: string;
-  /** Key that follows `g` to go there (see the shortcut list), if any. */
-  shortcut?: string;
+  /** The shortcut that goes there (config/shortcuts.ts), if any. */
+  shortcut?: ShortcutCommand;
 }
 
 /** The links a user with `role` sees; the show's links only once a show is chosen. */
@@ -24,14 +25,14 @@ export function navItems(role: Role | undefined, showId: string | undefined): Na
         label: 'Library',
         match: paths.library.path,
         href: paths.library.getHref(showId),
-        shortcut: 'l',
+        shortcut: 'goLibrary',
       },
       {
         key: 'shots',
         label: 'Shots',
         match: paths.shots.path,
         href: paths.shots.getHref(showId),
-        shortcut: 's',
+        shortcut: 'goShots',
       },
     );
     if (can(role, 'track')) {
@@ -40,7 +41,7 @@ export function navItems(role: Role | undefined, showId: string | undefined): Na
         label: 'Tracking',
         match: paths.tracking.path,
         href: paths.tracking.getHref(showId),
-        shortcut: 't',
+        shortcut: 'goTracking',
       });
     }
   }
@@ -50,7 +51,7 @@ export function navItems(role: Role | undefined, showId: string | undefined): Na
       label: 'Admin',
       match: paths.admin.path,
       href: paths.adminUsers.getHref(),
-      shortcut: 'a',
+      shortcut: 'goAdmin',
     });
   }
   items.push({
@@ -60,4 +61,14 @@ export function navItems(role: Role | undefined, showId: string | undefined): Na
     href: paths.status.getHref(),
   });
   return items;
+}
+
+/** Where each "go" shortcut leads for this user: their own links, and all their shows. */
+export function navTargets(
+  items: NavItem[],
+  allShowsHref: string,
+): Partial<Record<ShortcutCommand, string>> {
+  const targets: Partial<Record<ShortcutCommand, string>> = { goShows: allShowsHref };
+  for (const item of items) if (item.shortcut) targets[item.shortcut] = item.href;
+  return targets;
 }

@@ -1,5 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { RouteObject } from 'react-router-dom';
+import type { LayoutHandle } from '@/components/layouts/app-layout';
 import { paths } from '@/config/paths';
 import { getTakeQueryOptions } from './api/get-take';
 
@@ -8,6 +9,8 @@ export function takesRoutes(queryClient: QueryClient): RouteObject[] {
   return [
     {
       path: paths.take.path,
+      // The viewport takes the window's width, not the reading column's.
+      handle: { wide: true } satisfies LayoutHandle,
       loader: ({ params }) => {
         // Not awaited: the page shows its own loading and error states.
         if (params.showId && params.takeId) {

@@ -8,6 +8,7 @@ import {
   BufferAttribute,
   Group,
   type Mesh,
+  type MeshStandardMaterial,
   type Object3D,
 } from 'three';
 import { BVHLoader } from 'three/examples/jsm/loaders/BVHLoader.js';
@@ -48,9 +49,26 @@ export function motionBounds(content: PreviewContent, samples = 16): Box3 {
   return box;
 }
 
-/** Reads a .glb from memory. */
-export function parseGlb(buffer: ArrayBuffer): Promise<GLTF> {
-  return new GLTFLoader().parseAsync(buffer, '');
+/**
+ * Reads a .glb from memory. A file without materials of its own gets glTF's default, which is
+ * fully metallic: with no environment to reflect, its undersides render black. Those are shown
+ * matte instead, the way the take player shows a take.
+ */
+export async function parseGlb(buffer: ArrayBuffer): Promise<GLTF> {
+  const gltf = await new GLTFLoader().parseAsync(buffer, '');
+  const declared = (gltf.parser.json as { materials?: unknown[] }).materials?.length ?? 0;
+  if (declared === 0) {
+    gltf.scene.traverse((o) => {
+      const material = (o as Mesh).material as MeshStandardMaterial | undefined;
+      if (material?.isMeshStandardMaterial) {
+        material.metalness = 0;
+        material.roughness = 0.85;
+        // A mid clay grey: the view's lights are bright enough for white to lose its shape.
+        material.color.set('#aaa49b');
+      }
+    });
+  }
+  return gltf;
 }
 
 function disposeTree(root: Object3D): void {

@@ -1,9 +1,11 @@
 import { Button, Flex, Text, TextArea } from '@radix-ui/themes';
 import { useState } from 'react';
 import { ApiErrorCallout } from '@/components/errors/api-error-callout';
+import { KeyHint } from '@/components/ui/key-hint';
 import { Mono } from '@/components/ui/mono';
 import { useCreateNote } from '../api/create-note';
 import type { MarkPoint } from '../api/note-view';
+import { NOTE_TEXT_ID } from '../hooks/use-player-keys';
 import { pointCount, toMark } from '../review/mark-strokes';
 
 /** Props of the new-note form. */
@@ -49,12 +51,13 @@ export function NoteForm(props: NoteFormProps) {
     >
       <Flex direction="column" gap="2">
         <Flex justify="between" align="baseline">
-          <Text as="label" htmlFor="new-note-text" size="2" weight="medium">
+          <Text as="label" htmlFor={NOTE_TEXT_ID} size="2" weight="medium">
             New note at frame <Mono>{shotFrame}</Mono>
           </Text>
+          <KeyHint command="writeNote" />
         </Flex>
         <TextArea
-          id="new-note-text"
+          id={NOTE_TEXT_ID}
           value={text}
           onChange={(e) => setText(e.target.value)}
           placeholder="What should change at this frame?"
@@ -70,7 +73,7 @@ export function NoteForm(props: NoteFormProps) {
             onClick={() => onDrawingChange(!drawing)}
             data-testid="draw-mark"
           >
-            {drawing ? 'Drawing on the view' : 'Draw a mark'}
+            {drawing ? 'Drawing on the view' : 'Draw a mark'} <KeyHint command="toggleDrawing" />
           </Button>
           <Button
             type="button"

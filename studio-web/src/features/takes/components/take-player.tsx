@@ -1,5 +1,7 @@
-import { Flex, Grid, Text } from '@radix-ui/themes';
-import { useCallback, useReducer, useRef, useState } from 'react';
+import { Button, Flex, Text } from '@radix-ui/themes';
+import { useCallback, useMemo, useReducer, useRef, useState } from 'react';
+import { KeyHint } from '@/components/ui/key-hint';
+import { useOpenShortcutHelp } from '@/components/layouts/shortcuts-provider';
 import { usePermissions, useSession } from '@/features/auth';
 import { useShotTakes } from '../api/get-shot-takes';
 import { useNotes } from '../api/get-notes';
@@ -9,20 +11,19 @@ import type { MarkPoint, Note } from '../api/note-view';
 import type { Take } from '../api/take-view';
 import { useLiveTuning } from '../hooks/use-live-tuning';
 import { usePlaybackClock } from '../hooks/use-playback-clock';
-import { usePlayerShortcuts } from '../hooks/use-player-shortcuts';
+import { usePlayerKeys } from '../hooks/use-player-keys';
 import { useTakeModel } from '../hooks/use-take-model';
 import { useUrlFrame } from '../hooks/use-url-frame';
 import type { TakeModel } from '../player/take-model';
 import type { TakeViewer } from '../player/take-viewer';
-import { frameIndexOf, marksAtFrame } from '../review/note-frames';
-import type { PlayerCommand } from '../transport/shortcuts';
+import { marksAtFrame } from '../review/note-frames';
+import { takeFrameRange, takeIndexOf } from '../transport/shot-frames';
 import { initialTransport, transportReducer } from '../transport/transport-state';
 import { ControlsPanel } from './controls-panel';
 import { ControlsSummary } from './controls-summary';
 import { HeatMapLegend } from './heat-map-legend';
 import { MarkLayer } from './mark-layer';
 import { ReviewPanel } from './review-panel';
-import { ShortcutList } from './shortcut-list';
 import { TakeViewport } from './take-viewport';
 import { TransportBar } from './transport-bar';
 import { modeLabel, ViewOptions, type ViewSettings } from './view-options';
@@ -35,19 +36,18 @@ export interface TakePlayerProps {
   model: TakeModel;
 }
 
-const STEP_COMMANDS: Partial<Record<PlayerCommand, number>> = {
-  stepBack: -1,
-  stepForward: 1,
-  stepBack10: -10,
-  stepForward10: 10,
-};
-
 /** The take player: viewport, transport, compare and heat map, controls, and review. */
 export function TakePlayer({ showId, take, shot, model }: TakePlayerProps) {
   const { user, role } = useSession();
   const { can } = usePermissions();
+  // The take holds one frame per shot frame, from the shot's first: frames on screen and in the
+  // address are shot frames, and the viewer is posed by the take's own index.
+  const range = useMemo(
+    () => takeFrameRange(shot.frameStart, model.frameCount),
+    [shot.frameStart, model.frameCount],
+  );
   const [transport, dispatch] = useReducer(transportReducer, undefined, () =>
-    initialTransport(model.frameCount, shot.fps),
+    initialTransport(range, shot.fps),
   );
   const tuning = useLiveTuning(model);
   const [view, setView] = useState<ViewSettings>({
@@ -80,34 +80,28 @@ export function TakePlayer({ showId, take, shot, model }: TakePlayerProps) {
   }, []);
 
   usePlaybackClock(transport.playing, dispatch);
-  useUrlFrame(transport, shot.frameStart, dispatch);
-  usePlayerShortcuts((command) => {
-    const by = STEP_COMMANDS[command];
-    if (by !== undefined) return dispatch({ type: 'step', by });
-    if (command === 'togglePlay') dispatch({ type: 'toggle' });
-    else if (command === 'setIn') dispatch({ type: 'setIn' });
-    else if (command === 'setOut') dispatch({ type: 'setOut' });
-    else if (command === 'clearRange') dispatch({ type: 'clearRange' });
-    else if (command === 'toRangeStart') dispatch({ type: 'toRangeStart' });
-    else if (command === 'toRangeEnd') dispatch({ type: 'toRangeEnd' });
-    else if (command === 'toggleLoop') dispatch({ type: 'setLoop', loop: !transport.loop });
-    else if (command === 'toggleHeatMap') changeView({ heatMap: !view.heatMap });
-    else if (command === 'frameCharacter') frameCharacter();
+  useUrlFrame(transport, dispatch);
+
+  const onJump = useCallback((note: Note) => {
+    setActiveNoteId(note.id);
+    dispatch({ type: 'pause' });
+    dispatch({ type: 'seek', frame: note.frame });
+  }, []);
+
+  const canWrite = can('writeNote');
+  usePlayerKeys({
+    transport,
+    dispatch,
+    toggleHeatMap: () => changeView({ heatMap: !view.heatMap }),
+    frameCharacter,
+    notes: notes.data ?? [],
+    onJump,
+    canWrite,
+    toggleDrawing: () => setDrawing((d) => !d),
   });
+  const openHelp = useOpenShortcutHelp();
 
-  const onJump = useCallback(
-    (note: Note) => {
-      setActiveNoteId(note.id);
-      dispatch({ type: 'pause' });
-      dispatch({
-        type: 'seek',
-        frame: frameIndexOf(note.frame, shot.frameStart, model.frameCount),
-      });
-    },
-    [shot.frameStart, model.frameCount],
-  );
-
-  const shotFrame = shot.frameStart + transport.frame;
+  const shotFrame = transport.frame;
   const marks = marksAtFrame(notes.data ?? [], shotFrame);
   const others = (shotTakes.data ?? []).filter((t) => t.id !== take.id);
   const otherTake = others.find((t) => t.id === otherTakeId);
@@ -123,60 +117,70 @@ export function TakePlayer({ showId, take, shot, model }: TakePlayerProps) {
     tuning.solo === null ? null : `Solo: ${modeLabel(modes[tuning.solo], tuning.solo)}`;
 
   return (
-    <Flex direction="column" gap="4" data-testid="take-player" data-take-version={take.version}>
-      <TakeViewport
-        model={model}
-        basis={tuning.basis}
-        version={tuning.version}
-        frame={transport.frame}
-        compare={comparing ? view.compare : 'none'}
-        otherModel={view.compare === 'take' ? (otherModel.data ?? null) : null}
-        layout={view.layout}
-        heatMap={view.heatMap}
-        follow={view.follow}
-        sideLabels={sideLabels}
-        onHeatScale={setHeatScaleMm}
-        onViewer={onViewer}
-      >
-        <MarkLayer
-          notes={marks}
-          activeNoteId={activeNoteId}
-          drawing={drawing}
-          draft={draft}
-          onDraftChange={setDraft}
-        />
-        {view.heatMap && heatScaleMm > 0 ? (
-          <div className="take-viewport-legend">
-            <HeatMapLegend scaleMm={heatScaleMm} note={soloNote} />
-          </div>
+    <div className="take-layout" data-testid="take-player" data-take-version={take.version}>
+      <div className="take-stage">
+        <TakeViewport
+          model={model}
+          basis={tuning.basis}
+          version={tuning.version}
+          frame={takeIndexOf(transport.frame, range)}
+          compare={comparing ? view.compare : 'none'}
+          otherModel={view.compare === 'take' ? (otherModel.data ?? null) : null}
+          layout={view.layout}
+          heatMap={view.heatMap}
+          follow={view.follow}
+          sideLabels={sideLabels}
+          onHeatScale={setHeatScaleMm}
+          onViewer={onViewer}
+        >
+          <MarkLayer
+            notes={marks}
+            activeNoteId={activeNoteId}
+            drawing={drawing}
+            draft={draft}
+            onDraftChange={setDraft}
+          />
+          {view.heatMap && heatScaleMm > 0 ? (
+            <div className="take-viewport-legend">
+              <HeatMapLegend scaleMm={heatScaleMm} note={soloNote} />
+            </div>
+          ) : null}
+        </TakeViewport>
+        {comparing && view.layout === 'overlay' ? (
+          <Text size="1" color="gray">
+            Overlaid: {sideLabels?.[0]} drawn as an amber wireframe over take v{take.version}.
+          </Text>
         ) : null}
-      </TakeViewport>
-      {comparing && view.layout === 'overlay' ? (
-        <Text size="1" color="gray">
-          Overlaid: {sideLabels?.[0]} drawn as an amber wireframe over take v{take.version}.
-        </Text>
-      ) : null}
-      {view.compare === 'take' && otherModel.isError ? (
-        <Text size="2" color="red">
-          The other take cannot be shown: {String(otherModel.error)}
-        </Text>
-      ) : null}
-      <TransportBar
-        state={transport}
-        frameStart={shot.frameStart}
-        shotFps={shot.fps}
-        dispatch={dispatch}
-      />
-      <ViewOptions
-        settings={view}
-        onChange={changeView}
-        otherTakes={others}
-        modes={modes}
-        solo={tuning.solo}
-        onSolo={tuning.setSolo}
-        onFrameCharacter={frameCharacter}
-      />
-      <Grid columns={{ initial: '1', md: '2' }} gap="4" align="start">
+        {view.compare === 'take' && otherModel.isError ? (
+          <Text size="2" color="red">
+            The other take cannot be shown: {String(otherModel.error)}
+          </Text>
+        ) : null}
+        <TransportBar state={transport} shotFps={shot.fps} dispatch={dispatch} />
+        {range.last !== shot.frameEnd ? (
+          <Text size="1" color="amber" data-testid="range-mismatch">
+            This take has {model.frameCount} frames ({range.first}–{range.last}); the shot is now{' '}
+            {shot.frameStart}–{shot.frameEnd}. Solve the shot again for a take of its range.
+          </Text>
+        ) : null}
+        <Flex gap="4" align="end" justify="between" wrap="wrap">
+          <ViewOptions
+            settings={view}
+            onChange={changeView}
+            otherTakes={others}
+            modes={modes}
+            solo={tuning.solo}
+            onSolo={tuning.setSolo}
+            onFrameCharacter={frameCharacter}
+          />
+          <Flex height="32px" align="center">
+            <Button variant="ghost" color="gray" onClick={openHelp} data-testid="open-shortcuts">
+              Keyboard shortcuts <KeyHint command="showHelp" />
+            </Button>
+          </Flex>
+        </Flex>
+      </div>
+      <div className="take-panels">
         {can('tuneTake') ? (
           <ControlsPanel
             showId={showId}
@@ -185,16 +189,14 @@ export function TakePlayer({ showId, take, shot, model }: TakePlayerProps) {
             tuning={tuning}
             canSave={can('saveTake')}
           />
-        ) : (
-          <ControlsSummary model={model} solo={tuning.solo} />
-        )}
+        ) : null}
         <ReviewPanel
           showId={showId}
           take={take}
           shotFrame={shotFrame}
           userId={user.id}
           isAdmin={role === 'admin'}
-          canWrite={can('writeNote')}
+          canWrite={canWrite}
           canResolve={can('resolveNote')}
           canDecide={can('decide')}
           drawing={drawing}
@@ -203,8 +205,8 @@ export function TakePlayer({ showId, take, shot, model }: TakePlayerProps) {
           onDraftChange={setDraft}
           onJump={onJump}
         />
-      </Grid>
-      <ShortcutList />
-    </Flex>
+        {can('tuneTake') ? null : <ControlsSummary model={model} solo={tuning.solo} />}
+      </div>
+    </div>
   );
 }

@@ -1,7 +1,7 @@
-import { Button, Flex, Kbd, Select, Switch, Text } from '@radix-ui/themes';
+import { Button, Flex, Select, Switch, Text } from '@radix-ui/themes';
 import type { CSSProperties, Dispatch } from 'react';
 import { Mono } from '@/components/ui/mono';
-import { shotFrameOf } from '../review/note-frames';
+import { KeyHint } from '@/components/ui/key-hint';
 import {
   hasCustomRange,
   type TransportAction,
@@ -15,24 +15,21 @@ const COMMON_RATES = [12, 24, 25, 30, 48, 60];
 /** Props of the transport. */
 export interface TransportBarProps {
   state: TransportState;
-  /** Shot frame number of frame index 0. */
-  frameStart: number;
   /** The shot's own rate (the default). */
   shotFps: number;
   dispatch: Dispatch<TransportAction>;
 }
 
-/** Play, pause, step, the loop range, the playback rate and the frame counter. */
-export function TransportBar({ state, frameStart, shotFps, dispatch }: TransportBarProps) {
-  const last = state.frameCount - 1;
+/** Play, pause, step, the loop range, the playback rate and the frame counter (shot frames). */
+export function TransportBar({ state, shotFps, dispatch }: TransportBarProps) {
+  const { first, last } = state;
   const rates = [...new Set([shotFps, ...COMMON_RATES])].sort((a, b) => a - b);
-  const pct = (i: number) => (last > 0 ? (i / last) * 100 : 0);
+  const pct = (f: number) => (last > first ? ((f - first) / (last - first)) * 100 : 0);
   // The loop range shows on the scrubber's track as a lighter band.
   const rangeStyle = {
     '--range-in': `${pct(state.rangeIn)}%`,
     '--range-out': `${pct(state.rangeOut)}%`,
   } as CSSProperties;
-  const shot = (i: number) => shotFrameOf(i, frameStart);
 
   return (
     <Flex direction="column" gap="2" className="take-transport" data-testid="transport">
@@ -44,24 +41,24 @@ export function TransportBar({ state, frameStart, shotFps, dispatch }: Transport
           id="take-scrubber"
           className="take-range take-scrubber"
           type="range"
-          min={0}
+          min={first}
           max={last}
           step={1}
           value={state.frame}
           style={rangeStyle}
-          aria-valuetext={`Frame ${shot(state.frame)}`}
+          aria-valuetext={`Frame ${state.frame} of ${first}–${last}`}
           onChange={(e) => dispatch({ type: 'seek', frame: Number(e.target.value) })}
         />
         <Mono size="3" data-testid="frame-counter" aria-live="off">
-          {shot(state.frame)}
+          {state.frame}
         </Mono>
-        <Mono size="1" color="gray">
-          {shot(0)}–{shot(last)}
+        <Mono size="1" color="gray" data-testid="frame-range">
+          {first}–{last}
         </Mono>
       </Flex>
       <Flex align="center" gap="2" wrap="wrap">
         <Button variant="soft" color="gray" onClick={() => dispatch({ type: 'step', by: -1 })}>
-          <StepIcon /> Back <Kbd size="1">,</Kbd>
+          <StepIcon /> Back <KeyHint command="stepBack" />
         </Button>
         <Button
           onClick={() => dispatch({ type: 'toggle' })}
@@ -70,17 +67,17 @@ export function TransportBar({ state, frameStart, shotFps, dispatch }: Transport
           className="take-play-button"
         >
           {state.playing ? <PauseIcon /> : <PlayIcon />}
-          {state.playing ? 'Pause' : 'Play'} <Kbd size="1">Space</Kbd>
+          {state.playing ? 'Pause' : 'Play'} <KeyHint command="togglePlay" />
         </Button>
         <Button variant="soft" color="gray" onClick={() => dispatch({ type: 'step', by: 1 })}>
-          Forward <StepIcon forward /> <Kbd size="1">.</Kbd>
+          Forward <StepIcon forward /> <KeyHint command="stepForward" />
         </Button>
         <span className="take-transport-gap" />
         <Button variant="soft" color="gray" onClick={() => dispatch({ type: 'setIn' })}>
-          <BracketIcon /> Loop in <Kbd size="1">[</Kbd>
+          <BracketIcon /> Loop in <KeyHint command="setIn" />
         </Button>
         <Button variant="soft" color="gray" onClick={() => dispatch({ type: 'setOut' })}>
-          Loop out <BracketIcon out /> <Kbd size="1">]</Kbd>
+          Loop out <BracketIcon out /> <KeyHint command="setOut" />
         </Button>
         <Button
           variant="ghost"
@@ -88,10 +85,10 @@ export function TransportBar({ state, frameStart, shotFps, dispatch }: Transport
           disabled={!hasCustomRange(state)}
           onClick={() => dispatch({ type: 'clearRange' })}
         >
-          Clear range
+          Clear range <KeyHint command="clearRange" />
         </Button>
         <Mono size="1" color="gray" data-testid="loop-range">
-          {shot(state.rangeIn)}–{shot(state.rangeOut)}
+          {state.rangeIn}–{state.rangeOut}
         </Mono>
       </Flex>
       <Flex align="center" gap="4" wrap="wrap">
@@ -102,7 +99,7 @@ export function TransportBar({ state, frameStart, shotFps, dispatch }: Transport
               checked={state.loop}
               onCheckedChange={(loop) => dispatch({ type: 'setLoop', loop })}
             />
-            Loop the range <Kbd size="1">R</Kbd>
+            Loop the range <KeyHint command="toggleLoop" />
           </Flex>
         </Text>
         <Flex gap="2" align="center">

@@ -1,5 +1,6 @@
-import { Button, Flex, Kbd, SegmentedControl, Select, Switch, Text } from '@radix-ui/themes';
+import { Button, Flex, SegmentedControl, Select, Switch, Text } from '@radix-ui/themes';
 import type { Mode } from '@overshoot/solver';
+import { KeyHint } from '@/components/ui/key-hint';
 import type { Take } from '../api/take-view';
 import type { CompareKind } from '../player/take-viewer';
 import type { CompareLayout } from '../player/viewport-stage';
@@ -100,7 +101,7 @@ export function ViewOptions({
       </Text>
       <Flex height="32px" align="center">
         <Button variant="soft" color="gray" onClick={onFrameCharacter}>
-          Frame the character <Kbd size="1">F</Kbd>
+          Frame the character <KeyHint command="frameCharacter" />
         </Button>
       </Flex>
       <Text as="label" size="2">
@@ -110,7 +111,7 @@ export function ViewOptions({
             onCheckedChange={(heatMap) => onChange({ heatMap })}
             data-testid="heat-map-switch"
           />
-          Heat map <Kbd size="1">H</Kbd>
+          Heat map <KeyHint command="toggleHeatMap" />
         </Flex>
       </Text>
       <Flex direction="column" gap="1">

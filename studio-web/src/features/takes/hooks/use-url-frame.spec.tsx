@@ -2,6 +2,7 @@ import { act, render, screen } from '@testing-library/react';
 import { useReducer } from 'react';
 import { MemoryRouter, useLocation, useNavigate } from 'react-router-dom';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { takeFrameRange } from '../transport/shot-frames';
 import { initialTransport, transportReducer } from '../transport/transport-state';
 import { readFrameParam, URL_SYNC_DELAY_MS, useUrlFrame } from './use-url-frame';
 
@@ -9,9 +10,9 @@ const FRAME_START = 1001;
 
 function Player() {
   const [state, dispatch] = useReducer(transportReducer, undefined, () =>
-    initialTransport(100, 24),
+    initialTransport(takeFrameRange(FRAME_START, 100), 24),
   );
-  useUrlFrame(state, FRAME_START, dispatch);
+  useUrlFrame(state, dispatch);
   const location = useLocation();
   const navigate = useNavigate();
   return (
@@ -45,20 +46,20 @@ describe('useUrlFrame', () => {
     expect(readFrameParam(new URLSearchParams(''))).toBeNull();
   });
 
-  it('opens on the shot frame of the address (frame 1012 of a shot starting at 1001 is index 11)', () => {
+  it('opens on the shot frame of the address', () => {
     show('?frame=1012');
-    expect(screen.getByTestId('frame').textContent).toBe('11');
+    expect(screen.getByTestId('frame').textContent).toBe('1012');
   });
 
   it('clamps an address frame outside the shot to its ends', () => {
     show('?frame=5');
-    expect(screen.getByTestId('frame').textContent).toBe('0');
+    expect(screen.getByTestId('frame').textContent).toBe('1001');
   });
 
   it('jumps when the address changes (a note link) and writes the paused frame back', () => {
     show('?frame=1012');
     act(() => screen.getByText('note').click());
-    expect(screen.getByTestId('frame').textContent).toBe('49');
+    expect(screen.getByTestId('frame').textContent).toBe('1050');
     act(() => screen.getByText('step').click());
     expect(screen.getByTestId('search').textContent).toBe('?frame=1050');
     act(() => vi.advanceTimersByTime(URL_SYNC_DELAY_MS + 10));

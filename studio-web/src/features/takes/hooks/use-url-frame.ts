@@ -3,7 +3,6 @@
 // be shared.
 import { useEffect, type Dispatch } from 'react';
 import { useSearchParams } from 'react-router-dom';
-import { frameIndexOf, shotFrameOf } from '../review/note-frames';
 import type { TransportAction } from '../transport/transport-state';
 
 /** Pause before the address follows the frame, so stepping does not flood the history. */
@@ -16,30 +15,30 @@ export function readFrameParam(search: URLSearchParams): number | null {
   return Number(raw);
 }
 
-/** Seeks when the address's frame changes, and writes the frame back while paused. */
+/**
+ * Seeks when the address's frame changes, and writes the frame back while paused. Both are shot
+ * frames, like the transport's; the transport keeps a frame outside the shot at its ends.
+ */
 export function useUrlFrame(
-  transport: { frame: number; playing: boolean; frameCount: number },
-  frameStart: number,
+  transport: { frame: number; playing: boolean },
   dispatch: Dispatch<TransportAction>,
 ): void {
   const [search, setSearch] = useSearchParams();
   const urlFrame = readFrameParam(search);
-  const { frame, playing, frameCount } = transport;
+  const { frame, playing } = transport;
 
   useEffect(() => {
-    if (urlFrame === null) return;
-    dispatch({ type: 'seek', frame: frameIndexOf(urlFrame, frameStart, frameCount) });
-  }, [urlFrame, frameStart, frameCount, dispatch]);
+    if (urlFrame !== null) dispatch({ type: 'seek', frame: urlFrame });
+  }, [urlFrame, dispatch]);
 
   useEffect(() => {
     if (playing) return;
-    const shotFrame = shotFrameOf(frame, frameStart);
-    if (shotFrame === urlFrame) return;
+    if (frame === urlFrame) return;
     const timer = window.setTimeout(() => {
       setSearch(
         (prev) => {
           const next = new URLSearchParams(prev);
-          next.set('frame', String(shotFrame));
+          next.set('frame', String(frame));
           return next;
         },
         { replace: true, preventScrollReset: true },
@@ -48,5 +47,5 @@ export function useUrlFrame(
     return () => window.clearTimeout(timer);
     // urlFrame is read, not followed: the address changing must not re-arm this write.
     // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [frame, playing, frameStart, setSearch]);
+  }, [frame, playing, setSearch]);
 }

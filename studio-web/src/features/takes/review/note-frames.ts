@@ -1,21 +1,24 @@
-// Notes are pinned to shot frame numbers; the player counts frames from 0. These convert
-// between the two and pick the notes that belong to the frame on screen.
+// Notes are pinned to shot frame numbers, the same numbers the transport counts in. These pick
+// the notes that belong to the frame on screen and the note frames around it.
 import type { Note } from '../api/note-view';
-
-/** The player frame index of a shot frame number, inside 0 … frameCount − 1. */
-export function frameIndexOf(shotFrame: number, frameStart: number, frameCount: number): number {
-  const index = Math.round(shotFrame) - frameStart;
-  return Math.min(Math.max(0, index), Math.max(0, frameCount - 1));
-}
-
-/** The shot frame number of a player frame index. */
-export function shotFrameOf(index: number, frameStart: number): number {
-  return frameStart + index;
-}
 
 /** The notes pinned to a shot frame that carry a drawn mark. */
 export function marksAtFrame(notes: readonly Note[], shotFrame: number): Note[] {
   return notes.filter((n) => n.frame === shotFrame && n.mark !== null);
+}
+
+/** The nearest note frame after (`direction` 1) or before (−1) `shotFrame`, or null. */
+export function nextNoteFrame(
+  frames: readonly number[],
+  shotFrame: number,
+  direction: 1 | -1,
+): number | null {
+  let best: number | null = null;
+  for (const f of frames) {
+    if ((f - shotFrame) * direction <= 0) continue;
+    if (best === null || (f - best) * direction < 0) best = f;
+  }
+  return best;
 }
 
 /** Notes by frame, then oldest first, open before resolved within a frame. */

@@ -1,15 +1,18 @@
 // The take player's transport as pure state and a reducer: the current frame, play/pause, single
-// steps, a loop range (in/out) and the playback rate. Frames here are indices into the take
-// (0 … frameCount − 1); screens add the shot's first frame number when they show one.
+// steps, a loop range (in/out) and the playback rate. Every frame here is a shot frame number
+// (first … last, e.g. 1001 … 1048); only the viewer converts to the take's own index
+// (shot-frames.ts).
+import { clampShotFrame, type ShotFrameRange } from './shot-frames';
 
 /** Where the transport is. */
 export interface TransportState {
-  /** Frames in the take. */
-  frameCount: number;
-  /** Current frame index. */
+  /** First and last shot frame of the take. */
+  first: number;
+  last: number;
+  /** Current shot frame. */
   frame: number;
   playing: boolean;
-  /** Loop range, inclusive; the whole take unless the user set in or out. */
+  /** Loop range in shot frames, inclusive; the whole take unless the user set in or out. */
   rangeIn: number;
   rangeOut: number;
   /** Wrap from out to in (on) or stop at out (off). */
@@ -35,21 +38,27 @@ export type TransportAction =
   | { type: 'setLoop'; loop: boolean }
   | { type: 'setFps'; fps: number }
   | { type: 'tick'; seconds: number }
-  | { type: 'reset'; frameCount: number; fps: number; frame?: number };
+  | { type: 'reset'; range: ShotFrameRange; fps: number; frame?: number };
 
 /** Longest wall-clock gap one tick may cover: a hidden tab must not skip half the shot. */
 export const MAX_TICK_SECONDS = 0.25;
 
 const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v));
 
-/** A stopped transport at `frame` with the whole take as its range, looping. */
-export function initialTransport(frameCount: number, fps: number, frame = 0): TransportState {
-  const last = Math.max(0, frameCount - 1);
+/** A stopped transport at shot frame `frame` (default: the first) over the whole take, looping. */
+export function initialTransport(
+  range: ShotFrameRange,
+  fps: number,
+  frame = range.first,
+): TransportState {
+  const first = Math.round(range.first);
+  const last = Math.max(first, Math.round(range.last));
   return {
-    frameCount: Math.max(1, frameCount),
-    frame: clamp(Math.round(frame), 0, last),
+    first,
+    last,
+    frame: clampShotFrame(frame, { first, last }),
     playing: false,
-    rangeIn: 0,
+    rangeIn: first,
     rangeOut: last,
     loop: true,
     fps: fps > 0 ? fps : 24,
@@ -73,7 +82,7 @@ function advance(s: TransportState, seconds: number): TransportState {
 
 /** The next transport state. */
 export function transportReducer(s: TransportState, a: TransportAction): TransportState {
-  const last = s.frameCount - 1;
+  const { first, last } = s;
   switch (a.type) {
     case 'play': {
       if (s.playing) return s;
@@ -86,19 +95,24 @@ export function transportReducer(s: TransportState, a: TransportAction): Transpo
     case 'toggle':
       return transportReducer(s, { type: s.playing ? 'pause' : 'play' });
     case 'step':
-      return { ...s, playing: false, carry: 0, frame: clamp(s.frame + Math.trunc(a.by), 0, last) };
+      return {
+        ...s,
+        playing: false,
+        carry: 0,
+        frame: clamp(s.frame + Math.trunc(a.by), first, last),
+      };
     case 'seek':
-      return { ...s, carry: 0, frame: clamp(Math.round(a.frame), 0, last) };
+      return { ...s, carry: 0, frame: clamp(Math.round(a.frame), first, last) };
     case 'setIn': {
-      const frame = clamp(Math.round(a.frame ?? s.frame), 0, last);
+      const frame = clamp(Math.round(a.frame ?? s.frame), first, last);
       return { ...s, rangeIn: frame, rangeOut: Math.max(frame, s.rangeOut) };
     }
     case 'setOut': {
-      const frame = clamp(Math.round(a.frame ?? s.frame), 0, last);
+      const frame = clamp(Math.round(a.frame ?? s.frame), first, last);
       return { ...s, rangeOut: frame, rangeIn: Math.min(frame, s.rangeIn) };
     }
     case 'clearRange':
-      return { ...s, rangeIn: 0, rangeOut: last };
+      return { ...s, rangeIn: first, rangeOut: last };
     case 'toRangeStart':
       return { ...s, playing: false, carry: 0, frame: s.rangeIn };
     case 'toRangeEnd':
@@ -110,11 +124,11 @@ export function transportReducer(s: TransportState, a: TransportAction): Transpo
     case 'tick':
       return advance(s, a.seconds);
     case 'reset':
-      return initialTransport(a.frameCount, a.fps, a.frame ?? 0);
+      return initialTransport(a.range, a.fps, a.frame);
   }
 }
 
 /** True when the range is narrower than the whole take. */
 export function hasCustomRange(s: TransportState): boolean {
-  return s.rangeIn > 0 || s.rangeOut < s.frameCount - 1;
+  return s.rangeIn > s.first || s.rangeOut < s.last;
 }

@@ -12,6 +12,7 @@ import { paths } from '@/config/paths';
 import { dayCount, daysBetween, todayUtc } from '@/lib/dates';
 import type { ShotFilters } from '../api/shot-filters';
 import type { TrackedShot } from '../api/tracked-shot';
+import { ShotPlanDialog } from './shot-plan-dialog';
 import { SortHeader } from './sort-header';
 
 /** Props of the shot table. */
@@ -20,6 +21,10 @@ export interface ShotTableProps {
   shots: TrackedShot[];
   sort: ShotFilters['sort'];
   onSort: (sort: NonNullable<ShotFilters['sort']>) => void;
+  /** The user may set due dates and assignees. */
+  canPlan: boolean;
+  /** The user may set the render state by hand. */
+  canRender: boolean;
 }
 
 function DueDate({ shot, today }: { shot: TrackedShot; today: string }) {
@@ -36,10 +41,12 @@ function DueDate({ shot, today }: { shot: TrackedShot; today: string }) {
   );
 }
 
-/** The show's shots with assignees, due dates and their three states; headers sort. */
-export function ShotTable({ showId, shots, sort, onSort }: ShotTableProps) {
+/** The show's shots with assignees, due dates and their three states; headers sort, and a row's
+ * last cell updates its plan and render state for those allowed. */
+export function ShotTable({ showId, shots, sort, onSort, canPlan, canRender }: ShotTableProps) {
   const today = todayUtc();
   const header = { sort, onSort };
+  const editable = canPlan || canRender;
   return (
     <Table.Root variant="surface" size="1" data-testid="shot-table">
       <Table.Header>
@@ -67,6 +74,11 @@ export function ShotTable({ showId, shots, sort, onSort }: ShotTableProps) {
             Render
           </SortHeader>
           <Table.ColumnHeaderCell>Take</Table.ColumnHeaderCell>
+          {editable ? (
+            <Table.ColumnHeaderCell>
+              <span className="visually-hidden">Update</span>
+            </Table.ColumnHeaderCell>
+          ) : null}
         </Table.Row>
       </Table.Header>
       <Table.Body>
@@ -85,12 +97,14 @@ export function ShotTable({ showId, shots, sort, onSort }: ShotTableProps) {
               <Mono size="2">{shot.sequence}</Mono>
             </Table.Cell>
             <Table.Cell>
-              <Mono size="2">
-                {shot.frameStart}–{shot.frameEnd}
-              </Mono>{' '}
-              <Text size="1" color="gray">
-                @ <Mono size="1">{shot.fps}</Mono> fps
-              </Text>
+              <Flex direction="column" gap="1" align="start">
+                <Mono size="2" className="nowrap">
+                  {shot.frameStart}–{shot.frameEnd}
+                </Mono>
+                <Text size="1" color="gray" className="nowrap">
+                  <Mono size="1">{shot.fps}</Mono> fps
+                </Text>
+              </Flex>
             </Table.Cell>
             <Table.Cell>
               {shot.assignees.length ? (
@@ -118,6 +132,16 @@ export function ShotTable({ showId, shots, sort, onSort }: ShotTableProps) {
                 <Text color="gray">None</Text>
               )}
             </Table.Cell>
+            {editable ? (
+              <Table.Cell justify="end">
+                <ShotPlanDialog
+                  showId={showId}
+                  shot={shot}
+                  canPlan={canPlan}
+                  canRender={canRender}
+                />
+              </Table.Cell>
+            ) : null}
           </Table.Row>
         ))}
       </Table.Body>

@@ -89,6 +89,8 @@ export function TrackingScreen() {
                   shots={shots.data.items}
                   sort={filters.sort}
                   onSort={(sort) => setFilters({ ...filters, sort, page: undefined })}
+                  canPlan={can('planShot')}
+                  canRender={can('setRenderState')}
                 />
               ) : (
                 <Text color="gray" data-testid="no-shots">
