@@ -142,8 +142,8 @@ export { createLiveTuner, largestDisplacement, clampIndex } from './live/live-tu
 export type { LiveControls, LiveTuner } from './live/live-tune.js';
 export { rescaleRegionGains } from './live/region-rescale.js';
 export { luFactor, luSolve } from './linalg/lu-solve.js';
-export { writeTakeGlb } from './io/take-writer.js';
-export type { WriteTakeOptions } from './io/take-writer.js';
+export { writeTake, writeTakeGlb } from './io/take-writer.js';
+export type { WriteTakeOptions, WrittenTake } from './io/take-writer.js';
 export { readTakeGlb } from './io/take-reader.js';
 export type { TakeFile } from './io/take-reader.js';
 export {

@@ -16,12 +16,18 @@ import type { Character, Clip, Take } from '../types.js';
 import { addCharacter, floatAccessor } from './glb-character-writer.js';
 import { addClipChannels } from './glb-clip-writer.js';
 import { writeGlb } from './glb-container.js';
-import { takeExtras } from './take-extras.js';
+import { takeExtras, type TakeExtras } from './take-extras.js';
 
 /** Options of the take writer. */
 export interface WriteTakeOptions {
   /** How the pose correctives become morph targets. */
   correctives?: CorrectiveMorphOptions;
+}
+
+/** A written take: the file and the extras it carries (layout and warnings of the file). */
+export interface WrittenTake {
+  bytes: Uint8Array;
+  extras: TakeExtras;
 }
 
 /** Serialises `take` on `character` with the shot `clip` (the one `retarget` returned). */
@@ -31,6 +37,19 @@ export async function writeTakeGlb(
   clip: Clip,
   options: WriteTakeOptions = {},
 ): Promise<Uint8Array> {
+  return (await writeTake(take, character, clip, options)).bytes;
+}
+
+/**
+ * Serialises a take like `writeTakeGlb` and also returns its extras, whose warnings include what
+ * writing found (corrective targets short of their tolerance) beyond the take's own.
+ */
+export async function writeTake(
+  take: Take,
+  character: Character,
+  clip: Clip,
+  options: WriteTakeOptions = {},
+): Promise<WrittenTake> {
   const k = take.live.k;
   const n3 = character.restPositions.length;
   const frames = take.frameCount;
@@ -88,5 +107,5 @@ export async function writeTakeGlb(
   const tolerance = options.correctives?.tolerance ?? CORRECTIVE_MORPH_DEFAULTS.tolerance;
   const extras = takeExtras(take, { first: k, count: r, errorBound: corrective.errorBound, tolerance }); // prettier-ignore
   root.setExtras({ ...root.getExtras(), overshoot: extras });
-  return writeGlb(doc);
+  return { bytes: await writeGlb(doc), extras };
 }

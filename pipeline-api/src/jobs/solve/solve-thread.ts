@@ -16,7 +16,7 @@ import {
   startKernelThreads,
   stopKernelThreads,
   writeProfile,
-  writeTakeGlb,
+  writeTake,
   type LearnResult,
 } from '@overshoot/solver';
 import type {
@@ -111,15 +111,17 @@ async function retargetShot(req: RetargetRequest): Promise<RetargetReply> {
   });
   progress('write', 1);
   const { take } = result;
+  // The file's warnings: the take's own and what writing it found (e.g. correctives).
+  const written = await writeTake(take, character, result.clip);
   return {
-    take: await writeTakeGlb(take, character, result.clip),
+    take: written.bytes,
     metrics: {
       ...take.metrics,
       fps: take.fps,
       frameCount: take.frameCount,
       modes: take.modes,
       unmappedDrivers: result.drivers.unmapped,
-      warnings: take.warnings,
+      warnings: written.extras.warnings,
       profileId: take.profileId,
     },
   };
