@@ -6,6 +6,7 @@ import { Migration20261203000000_library } from './Migration20261203000000_libra
 import { Migration20261204000000_production } from './Migration20261204000000_production';
 import { Migration20261205000000_shot_list_indexes } from './Migration20261205000000_shot_list_indexes';
 import { Migration20261215000000_solver_jobs } from './Migration20261215000000_solver_jobs';
+import { Migration20261216000000_job_defaults } from './Migration20261216000000_job_defaults';
 
 /** Every migration, oldest first. */
 export const MIGRATIONS = [
@@ -18,4 +19,5 @@ export const MIGRATIONS = [
     class: Migration20261205000000_shot_list_indexes,
   },
   { name: 'Migration20261215000000_solver_jobs', class: Migration20261215000000_solver_jobs },
+  { name: 'Migration20261216000000_job_defaults', class: Migration20261216000000_job_defaults },
 ];

@@ -1,10 +1,9 @@
-import { randomUUID } from 'node:crypto';
-import { Entity, Enum, Index, ManyToOne, OneToOne, PrimaryKey, Property } from '@mikro-orm/core';
-import { Show } from '../../shows/entities/show.entity';
+import { Entity, Index, OneToOne, Property } from '@mikro-orm/core';
 import { User } from '../../users/entities/user.entity';
 import { ProfileState, TissueProfile } from '../../library/entities/tissue-profile.entity';
 import { JobState } from '../job-state';
-import { applyJobMove, type JobRecord, type MoveInfo } from '../job-move';
+import { applyJobMove, type MoveInfo } from '../job-move';
+import { JobColumns } from './job-columns';
 
 /** Settings of one learn that the caller may choose (the solver's defaults otherwise). */
 export interface LearnSettings {
@@ -26,13 +25,7 @@ const PROFILE_STATE: Record<JobState, ProfileState> = {
 @Entity({ tableName: 'learn_jobs' })
 @Index({ properties: ['show', 'state'] })
 @Index({ properties: ['show', 'createdAt'] })
-export class LearnJob implements JobRecord {
-  @PrimaryKey({ type: 'uuid' })
-  id: string = randomUUID();
-
-  @ManyToOne(() => Show)
-  show: Show;
-
+export class LearnJob extends JobColumns {
   /** The profile this job learns (one job per profile; retries stay inside the job). */
   @OneToOne(() => TissueProfile, { owner: true })
   profile: TissueProfile;
@@ -40,42 +33,8 @@ export class LearnJob implements JobRecord {
   @Property({ type: 'json' })
   settings: LearnSettings;
 
-  @Enum({ items: () => JobState })
-  state: JobState = JobState.Queued;
-
-  @Property({ type: 'string', length: 60, nullable: true })
-  stage?: string | null;
-
-  @Property({ type: 'integer' })
-  percent = 0;
-
-  @Property({ type: 'integer' })
-  attempts = 0;
-
-  @Property({ type: 'string', length: 60, nullable: true })
-  errorCode?: string | null;
-
-  @Property({ type: 'text', nullable: true })
-  errorMessage?: string | null;
-
-  /** The person who asked for it (null when a pipeline token did). */
-  @ManyToOne(() => User, { nullable: true })
-  submittedBy?: User | null;
-
-  /** Host, process and attempt that last ran it. */
-  @Property({ type: 'string', length: 120, nullable: true })
-  worker?: string | null;
-
-  @Property({ type: 'datetime' })
-  createdAt: Date = new Date();
-
-  @Property({ type: 'datetime', nullable: true })
-  startedAt?: Date | null;
-
-  @Property({ type: 'datetime', nullable: true })
-  finishedAt?: Date | null;
-
   constructor(profile: TissueProfile, settings: LearnSettings, submittedBy: User | null) {
+    super();
     this.show = profile.show;
     this.profile = profile;
     this.settings = settings;

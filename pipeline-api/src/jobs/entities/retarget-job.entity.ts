@@ -1,24 +1,17 @@
-import { randomUUID } from 'node:crypto';
-import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property } from '@mikro-orm/core';
-import { Show } from '../../shows/entities/show.entity';
+import { Entity, Index, ManyToOne, Property } from '@mikro-orm/core';
 import { User } from '../../users/entities/user.entity';
 import { Shot } from '../../shots/entities/shot.entity';
 import { TissueProfile } from '../../library/entities/tissue-profile.entity';
 import { Take } from '../../takes/entities/take.entity';
 import { JobState } from '../job-state';
-import { applyJobMove, type JobRecord, type MoveInfo } from '../job-move';
+import { applyJobMove, type MoveInfo } from '../job-move';
+import { JobColumns } from './job-columns';
 
 /** One solver run for a shot with a profile and the artist's controls. */
 @Entity({ tableName: 'retarget_jobs' })
 @Index({ properties: ['show', 'state'] })
 @Index({ properties: ['show', 'createdAt'] })
-export class RetargetJob implements JobRecord {
-  @PrimaryKey({ type: 'uuid' })
-  id: string = randomUUID();
-
-  @ManyToOne(() => Show)
-  show: Show;
-
+export class RetargetJob extends JobColumns {
   @ManyToOne(() => Shot)
   shot: Shot;
 
@@ -37,47 +30,13 @@ export class RetargetJob implements JobRecord {
   @ManyToOne(() => Take, { nullable: true })
   baseTake?: Take | null;
 
-  @Enum({ items: () => JobState })
-  state: JobState = JobState.Queued;
-
-  @Property({ type: 'string', length: 60, nullable: true })
-  stage?: string | null;
-
-  @Property({ type: 'integer' })
-  percent = 0;
-
-  @Property({ type: 'integer' })
-  attempts = 0;
-
-  @Property({ type: 'string', length: 60, nullable: true })
-  errorCode?: string | null;
-
-  @Property({ type: 'text', nullable: true })
-  errorMessage?: string | null;
-
-  /** The person who submitted it (null when a pipeline token did). */
-  @ManyToOne(() => User, { nullable: true })
-  submittedBy?: User | null;
-
-  /** Host, process and attempt that last ran it. */
-  @Property({ type: 'string', length: 120, nullable: true })
-  worker?: string | null;
-
-  @Property({ type: 'datetime' })
-  createdAt: Date = new Date();
-
-  @Property({ type: 'datetime', nullable: true })
-  startedAt?: Date | null;
-
-  @Property({ type: 'datetime', nullable: true })
-  finishedAt?: Date | null;
-
   constructor(
     shot: Shot,
     profile: TissueProfile,
     controls: Record<string, unknown>,
     submittedBy: User | null,
   ) {
+    super();
     this.show = shot.show;
     this.shot = shot;
     this.profile = profile;
