@@ -118,17 +118,25 @@ export function applyCorrectives(
   out: Float32Array | Float64Array,
   outOffset = 0,
 ): void {
-  const { featureJoints, coefficients, featuresPerVertex: fpv, featureMin: lo, featureMax: hi } = correctives; // prettier-ignore
+  const { featureJoints, coefficients, featuresPerVertex: fpv, featureMin: lo } = correctives;
   const n = featureJoints.length / 4;
   const slots = fpv / FEATURES_PER_JOINT;
+  // Clamp the frame's features once here, not once per vertex that reads them.
+  let frame = features;
+  let fo = featureOffset;
+  if (lo && correctives.featureMax) {
+    const copy = new Float64Array(lo.length);
+    for (let k = 0; k < lo.length; k++) copy[k] = features[featureOffset + k];
+    frame = clampFeatures(correctives, copy, 1);
+    fo = 0;
+  }
   for (let i = 0; i < n; i++) {
     let x = 0, y = 0, z = 0; // prettier-ignore
     for (let s = 0; s < slots; s++) {
-      const jo = featureJoints[4 * i + s] * FEATURES_PER_JOINT;
+      const fb = fo + featureJoints[4 * i + s] * FEATURES_PER_JOINT;
       const co = i * 3 * fpv + s * FEATURES_PER_JOINT;
       for (let f = 0; f < FEATURES_PER_JOINT; f++) {
-        let v = features[featureOffset + jo + f];
-        if (lo && hi) v = v < lo[jo + f] ? lo[jo + f] : v > hi[jo + f] ? hi[jo + f] : v;
+        const v = frame[fb + f];
         if (v === 0) continue;
         x += v * coefficients[co + f];
         y += v * coefficients[co + fpv + f];

@@ -6,7 +6,7 @@
 // a corrective's time course lies wholly in the span of the pose features (explained share 1),
 // while tissue ringing does not. With the temporal combinations orthonormal, the spatial pattern
 // of each is exact: a corrective in the span never leaks into the pattern of a dynamic one.
-import { cholesky, choleskySolve } from '../linalg/ridge.js';
+import { cholesky, choleskySolve, crossColumns, gramColumns } from '../linalg/ridge.js';
 import { symmetricEigen } from '../linalg/sym-eigen.js';
 
 /** Canonical directions of a region's components against its pose features. */
@@ -41,17 +41,10 @@ export function screenComponents(
   const scale = new Float64Array(p);
   for (let t = 0; t < frames; t++) for (let f = 0; f < p; f++) scale[f] += features[t * p + f] ** 2;
   for (let f = 0; f < p; f++) scale[f] = Math.sqrt(scale[f] / frames) || 1;
-  const gram = new Float64Array(p * p);
-  const cross = new Float64Array(p * l);
-  const x = new Float64Array(p);
-  for (let t = 0; t < frames; t++) {
-    for (let f = 0; f < p; f++) x[f] = features[t * p + f] / scale[f];
-    for (let a = 0; a < p; a++) {
-      if (x[a] === 0) continue;
-      for (let b = 0; b < p; b++) gram[a * p + b] += x[a] * x[b];
-      for (let q = 0; q < l; q++) cross[a * l + q] += x[a] * cw[t * l + q];
-    }
-  }
+  const x = new Float64Array(frames * p);
+  for (let t = 0; t < frames; t++) for (let f = 0; f < p; f++) x[t * p + f] = features[t * p + f] / scale[f]; // prettier-ignore
+  const gram = gramColumns(x, p, 0, frames);
+  const cross = crossColumns(x, p, cw, l, 0, frames);
   let trace = 0;
   for (let a = 0; a < p; a++) trace += gram[a * p + a];
   for (let a = 0; a < p; a++) gram[a * p + a] += 1e-9 * (trace / p || 1);

@@ -6,11 +6,12 @@
 // signal, where a whole-body decomposition leaves their difference on a weak, noisy direction;
 // and the noise in each direction is only that of its region's vertices.
 import { leadingSubspace, type SubspaceMethod } from './dynamic-subspace.js';
+import { frobeniusSquared } from '../linalg/subspace.js';
 import { deriveRegions } from '../rig/regions.js';
 import type { Character, Regions } from '../types.js';
 import { FEATURES_PER_JOINT } from './pose-features.js';
 import { screenComponents } from './pose-screen.js';
-import { influencingJoints } from './vertex-groups.js';
+import { influencingJoints, jointChildren } from './vertex-groups.js';
 
 /** Options of the direction search. */
 export interface RegionDirectionOptions {
@@ -76,12 +77,12 @@ export function regionsOf(character: Character): Regions {
  * Joints whose pose features screen a region: the influencing joints of its vertices, most
  * widespread first, as many as keep the feature count within a quarter of the frames.
  */
-function regionJoints(character: Character, vertices: number[], frames: number): number[] {
-  const { parents } = character.skeleton;
-  const children: number[][] = Array.from(parents, () => []);
-  parents.forEach((p, j) => {
-    if (p >= 0) children[p].push(j);
-  });
+function regionJoints(
+  character: Character,
+  children: number[][],
+  vertices: number[],
+  frames: number,
+): number[] {
   const count = new Map<number, number>();
   for (const i of vertices)
     for (const j of influencingJoints(character, i, children))
@@ -107,8 +108,8 @@ export function regionDirections(
   const n = character.restPositions.length / 3;
   const d = 3 * n;
   const jc = character.skeleton.names.length;
-  let total = 0;
-  for (let i = 0; i < frames * d; i++) total += residuals[i] * residuals[i];
+  const children = jointChildren(character.skeleton.parents);
+  const total = frobeniusSquared(residuals.subarray(0, frames * d));
   const found: { row: Float64Array; region: number; energy: number }[] = [];
   let leastExplained: {
     row: Float64Array;
@@ -155,7 +156,7 @@ export function regionDirections(
     const c = new Float64Array(frames * l);
     for (let t = 0; t < frames; t++)
       for (let q = 0; q < l; q++) c[t * l + q] = sub.coefficients[t * sub.k + q];
-    const joints = regionJoints(character, vertices, frames);
+    const joints = regionJoints(character, children, vertices, frames);
     const p = joints.length * FEATURES_PER_JOINT;
     const fx = new Float64Array(frames * p);
     for (let t = 0; t < frames; t++) {

@@ -12,6 +12,13 @@ export interface Group {
   vertices: number[];
 }
 
+/** Each joint's child joints, from the skeleton's parent list. */
+export function jointChildren(parents: ArrayLike<number>): number[][] {
+  const children: number[][] = Array.from({ length: parents.length }, () => []);
+  for (let j = 0; j < parents.length; j++) if (parents[j] >= 0) children[parents[j]].push(j);
+  return children;
+}
+
 /**
  * The ≤ 4 joints whose rotation can deform vertex i: its skin joints and their children (a bone's
  * flesh also bulges when the joint at its far end bends), ranked by skin weight, a child scoring
@@ -44,10 +51,7 @@ export function influencingJoints(character: Character, i: number, children: num
 export function groupVertices(character: Character): Group[] {
   const n = character.restPositions.length / 3;
   const { parents } = character.skeleton;
-  const children: number[][] = Array.from({ length: parents.length }, () => []);
-  parents.forEach((p, j) => {
-    if (p >= 0) children[p].push(j);
-  });
+  const children = jointChildren(parents);
   const groups = new Map<string, Group>();
   for (let i = 0; i < n; i++) {
     const joints = influencingJoints(character, i, children);

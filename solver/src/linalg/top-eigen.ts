@@ -3,8 +3,8 @@
 // Approaches tried on the 600×600 Gram matrix of a capture: ml-matrix's full
 // EigenvalueDecomposition took 2.6 s; 8 iterations of a 42-column block take about 0.1 s and
 // agree on every eigenvalue above the noise floor (see bench/). The block product A·Q runs on
-// the 4 × 4 blocked X Wᵀ kernel (about 3× the row-by-row axpy loop it replaced). Small matrices (n ≤ 64) go
-// straight to Jacobi.
+// the 4 × 4 blocked X Wᵀ kernel (about 3× the row-by-row axpy loop it replaced). Small matrices
+// (n ≤ 64) go straight to Jacobi.
 import { multiplyByRows } from './gram-kernel.js';
 import { orthonormaliseColumns } from './orthonormalise.js';
 import { seededNormal } from './seeded-random.js';

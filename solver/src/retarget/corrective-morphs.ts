@@ -13,6 +13,7 @@
 // 1e7 on targets of norm 1e-8 and a Frobenius-norm bound of 4 m.
 import { clampFeatures, poseFeatures } from '../learn/pose-features.js';
 import { orthonormaliseColumns } from '../linalg/orthonormalise.js';
+import { crossColumns } from '../linalg/ridge.js';
 import { seededNormal } from '../linalg/seeded-random.js';
 import { fixSigns } from '../linalg/sign-fix.js';
 import { symmetricEigen } from '../linalg/sym-eigen.js';
@@ -106,13 +107,7 @@ export function correctiveMorphs(
   }
   orthonormaliseColumns(q, t, l);
   // W = Qᵀ F (l × p); B Bᵀ = W (C Cᵀ) Wᵀ = U Σ² Uᵀ.
-  const w = new Float64Array(l * p);
-  for (let r = 0; r < t; r++) {
-    for (let a = 0; a < l; a++) {
-      const qa = q[r * l + a];
-      if (qa !== 0) for (let b = 0; b < p; b++) w[a * p + b] += qa * fa[r * p + b];
-    }
-  }
+  const w = crossColumns(q, l, fa, p, 0, t);
   const wg = multiply(w, gc, l, p, p);
   const h = new Float64Array(l * l);
   for (let a = 0; a < l; a++) {
@@ -250,14 +245,7 @@ function applyGram(
   q: Float64Array,
   l: number,
 ): Float64Array {
-  const ftq = new Float64Array(p * l);
-  for (let r = 0; r < t; r++) {
-    for (let a = 0; a < p; a++) {
-      const v = f[r * p + a];
-      if (v !== 0) for (let b = 0; b < l; b++) ftq[a * l + b] += v * q[r * l + b];
-    }
-  }
-  return multiply(f, multiply(g, ftq, p, p, l), t, p, l);
+  return multiply(f, multiply(g, crossColumns(f, p, q, l, 0, t), p, p, l), t, p, l);
 }
 
 /** A (rows × inner) times B (inner × cols), row-major. */
