@@ -1,10 +1,10 @@
-import { Button, Callout, Flex, TextField } from '@radix-ui/themes';
+import { Button, Callout, Flex } from '@radix-ui/themes';
 import { useState, type FormEvent } from 'react';
 import { ApiErrorCallout } from '@/components/errors/api-error-callout';
-import { FormField } from '@/components/ui/form-field';
 import { CheckIcon } from '@/components/ui/icons';
 import { checkEmail } from '@/lib/validation';
 import { useRequestPasswordReset } from '../api/request-password-reset';
+import { EmailField } from './email-field';
 
 /** Asks for a reset link by e-mail; says the same whether the address is known or not. */
 export function RequestResetForm() {
@@ -32,19 +32,7 @@ export function RequestResetForm() {
   return (
     <form onSubmit={submit} noValidate aria-label="Ask for a reset link">
       <Flex direction="column" gap="4">
-        <FormField label="E-mail" error={error}>
-          {(control) => (
-            <TextField.Root
-              {...control}
-              type="email"
-              name="email"
-              autoComplete="username"
-              size="3"
-              value={email}
-              onChange={(e) => setEmail(e.target.value)}
-            />
-          )}
-        </FormField>
+        <EmailField value={email} onChange={setEmail} error={error} />
         {request.isError ? <ApiErrorCallout error={request.error} /> : null}
         <Button type="submit" size="3" loading={request.isPending}>
           Send a reset link

@@ -11,6 +11,7 @@ import {
 } from '@/lib/validation';
 import { useSignIn } from '../api/sign-in';
 import type { SessionUser } from '../api/session-user';
+import { EmailField } from './email-field';
 
 type Field = 'email' | 'password';
 
@@ -41,19 +42,7 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
   return (
     <form onSubmit={submit} noValidate aria-label="Sign in">
       <Flex direction="column" gap="4">
-        <FormField label="E-mail" error={errors.email}>
-          {(control) => (
-            <TextField.Root
-              {...control}
-              type="email"
-              name="email"
-              autoComplete="username"
-              size="3"
-              value={email}
-              onChange={(e) => setEmail(e.target.value)}
-            />
-          )}
-        </FormField>
+        <EmailField value={email} onChange={setEmail} error={errors.email} />
         <FormField label="Password" error={errors.password}>
           {(control) => (
             <TextField.Root

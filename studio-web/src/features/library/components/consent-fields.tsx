@@ -1,5 +1,6 @@
 import { Flex, Grid, Select, TextArea, TextField } from '@radix-ui/themes';
 import { FormField } from '@/components/ui/form-field';
+import { todayUtc } from '@/lib/dates';
 import type { Character } from '../api/library-types';
 import type { ConsentInput } from '../api/upload-types';
 
@@ -21,11 +22,6 @@ export type CaptureDetailErrors = Partial<Record<keyof CaptureDetails, string>>;
 
 // The API's rule for reference codes (upload DTO): 2–40 letters, digits, . _ -.
 const PERFORMER_CODE = /^[A-Za-z0-9][A-Za-z0-9._-]{1,39}$/;
-
-/** Today as YYYY-MM-DD in UTC, as the API compares expiry dates. */
-export function todayUtc(now = new Date()): string {
-  return now.toISOString().slice(0, 10);
-}
 
 /** Checks the capture form; each problem in words, by field. */
 export function checkCaptureDetails(d: CaptureDetails, today = todayUtc()): CaptureDetailErrors {

@@ -1,4 +1,4 @@
-import { Card, DataList, Flex, Text } from '@radix-ui/themes';
+import { Card, DataList, Flex } from '@radix-ui/themes';
 import { useParams } from 'react-router-dom';
 import { useCurrentShow } from '@/features/auth';
 import { Mono } from '@/components/ui/mono';
@@ -6,6 +6,7 @@ import { useCharacter } from '../api/get-character';
 import { downloadFile } from '../api/get-file-link';
 import { AssetStateLabel } from '../components/asset-state-label';
 import { DetailHeader } from '../components/detail-header';
+import { JointsItem } from '../components/joints-item';
 import { QueryState } from '../components/query-state';
 import { ValidationReportCallout } from '../components/validation-report';
 import { AssetPreview } from '../preview/asset-preview';
@@ -63,14 +64,7 @@ export function CharacterRoute() {
                 <DataList.Label>Regions</DataList.Label>
                 <DataList.Value>{c.regions?.join(', ') || '—'}</DataList.Value>
               </DataList.Item>
-              <DataList.Item>
-                <DataList.Label>Joints ({c.joints?.length ?? 0})</DataList.Label>
-                <DataList.Value>
-                  <Text size="1" className="mono">
-                    {c.joints?.join(' · ') || '—'}
-                  </Text>
-                </DataList.Value>
-              </DataList.Item>
+              <JointsItem joints={c.joints} />
             </DataList.Root>
           </Card>
         </Flex>

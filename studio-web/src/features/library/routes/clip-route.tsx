@@ -1,4 +1,4 @@
-import { Card, DataList, Flex, Select, Text } from '@radix-ui/themes';
+import { Card, DataList, Flex, Select } from '@radix-ui/themes';
 import { useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { FormField } from '@/components/ui/form-field';
@@ -11,6 +11,7 @@ import type { Character, Clip } from '../api/library-types';
 import { AssetStateLabel } from '../components/asset-state-label';
 import { clipSeconds } from '../components/clip-table';
 import { DetailHeader } from '../components/detail-header';
+import { JointsItem } from '../components/joints-item';
 import { QueryState } from '../components/query-state';
 import { ValidationReportCallout } from '../components/validation-report';
 import { AssetPreview } from '../preview/asset-preview';
@@ -109,14 +110,7 @@ export function ClipRoute() {
                     </Mono>
                   </DataList.Value>
                 </DataList.Item>
-                <DataList.Item>
-                  <DataList.Label>Joints ({c.joints?.length ?? 0})</DataList.Label>
-                  <DataList.Value>
-                    <Text size="1" className="mono">
-                      {c.joints?.join(' · ') || '—'}
-                    </Text>
-                  </DataList.Value>
-                </DataList.Item>
+                <JointsItem joints={c.joints} />
               </DataList.Root>
             </Card>
           </Flex>

@@ -18,7 +18,7 @@ export function getShotQueryOptions(showId: string, id: string) {
   });
 }
 
-/** One shot. */
-export function useShot(showId: string, id: string) {
-  return useQuery(getShotQueryOptions(showId, id));
+/** One shot; idle while the id is not known yet. */
+export function useShot(showId: string, id: string | undefined) {
+  return useQuery({ ...getShotQueryOptions(showId, id ?? ''), enabled: id !== undefined });
 }

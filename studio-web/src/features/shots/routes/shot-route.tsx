@@ -21,6 +21,24 @@ import { ShotJobs } from '../components/shot-jobs';
 import { TakesTable } from '../components/takes-table';
 import { useLiveShots } from '../hooks/use-live-shots';
 
+/** A field naming a library item: a link to it, or "None yet" while the shot has none. */
+function LinkedItem({ label, href, name }: { label: string; href: string | null; name: string }) {
+  return (
+    <DataList.Item>
+      <DataList.Label>{label}</DataList.Label>
+      <DataList.Value>
+        {href ? (
+          <RadixLink asChild>
+            <Link to={href}>{name}</Link>
+          </RadixLink>
+        ) : (
+          'None yet'
+        )}
+      </DataList.Value>
+    </DataList.Item>
+  );
+}
+
 /** One shot: its fields, states, retarget jobs (live) and takes. */
 export function ShotRoute() {
   const { showId } = useCurrentShow();
@@ -85,34 +103,16 @@ export function ShotRoute() {
                   </Mono>
                 </DataList.Value>
               </DataList.Item>
-              <DataList.Item>
-                <DataList.Label>Target character</DataList.Label>
-                <DataList.Value>
-                  {s.characterId ? (
-                    <RadixLink asChild>
-                      <Link to={paths.character.getHref(showId, s.characterId)}>
-                        {character.data?.name ?? 'the character'}
-                      </Link>
-                    </RadixLink>
-                  ) : (
-                    'None yet'
-                  )}
-                </DataList.Value>
-              </DataList.Item>
-              <DataList.Item>
-                <DataList.Label>Clip</DataList.Label>
-                <DataList.Value>
-                  {s.clipId ? (
-                    <RadixLink asChild>
-                      <Link to={paths.clip.getHref(showId, s.clipId)}>
-                        {clip.data?.name ?? 'the clip'}
-                      </Link>
-                    </RadixLink>
-                  ) : (
-                    'None yet'
-                  )}
-                </DataList.Value>
-              </DataList.Item>
+              <LinkedItem
+                label="Target character"
+                href={s.characterId ? paths.character.getHref(showId, s.characterId) : null}
+                name={character.data?.name ?? 'the character'}
+              />
+              <LinkedItem
+                label="Clip"
+                href={s.clipId ? paths.clip.getHref(showId, s.clipId) : null}
+                name={clip.data?.name ?? 'the clip'}
+              />
               <DataList.Item>
                 <DataList.Label>Assignees</DataList.Label>
                 <DataList.Value>

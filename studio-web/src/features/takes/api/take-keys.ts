@@ -10,7 +10,6 @@ export const takeKeys = {
   notes: (showId: string, takeId: string) => ['shows', showId, 'takes', takeId, 'notes'] as const,
   decisions: (showId: string, takeId: string) =>
     ['shows', showId, 'takes', takeId, 'decisions'] as const,
-  shot: (showId: string, shotId: string) => ['shows', showId, 'shots', shotId] as const,
   shotTakes: (showId: string, shotId: string) =>
     ['shows', showId, 'shots', shotId, 'takes'] as const,
   job: (showId: string, jobId: string) => ['shows', showId, 'jobs', jobId] as const,

@@ -2,7 +2,7 @@ import { Button, Card, Flex, Grid, Heading, Text } from '@radix-ui/themes';
 import { memo } from 'react';
 import { Mono } from '@/components/ui/mono';
 import type { Take } from '../api/take-view';
-import type { LiveTuningApi } from '../hooks/use-live-tuning';
+import type { LiveTuningApi, TuningControls } from '../hooks/use-live-tuning';
 import type { TakeModel } from '../player/take-model';
 import { ModeTable } from './mode-table';
 import { SaveTake } from './save-take';
@@ -17,6 +17,13 @@ export interface ControlsPanelProps {
   /** The user may save the tuned controls as a new take. */
   canSave: boolean;
 }
+
+/** The three whole-take sliders; stiffness and damping stop short of 0, where nothing settles. */
+const DYNAMICS = [
+  { key: 'gain', label: 'Gain', min: 0 },
+  { key: 'stiffness', label: 'Stiffness', min: 0.25 },
+  { key: 'damping', label: 'Damping', min: 0.25 },
+] as const satisfies readonly { key: keyof TuningControls; label: string; min: number }[];
 
 const fmtMs = (ms: number | null) => (ms === null ? '–' : ms.toFixed(1));
 
@@ -59,39 +66,20 @@ export const ControlsPanel = memo(function ControlsPanel({
             </Button>
           </Flex>
           <Flex direction="column" gap="3">
-            <SliderRow
-              label="Gain"
-              value={controls.gain}
-              min={0}
-              max={4}
-              step={0.05}
-              unit=" ×"
-              original={initial.gain}
-              onChange={(gain) => tuning.update({ gain })}
-              testId="control-gain"
-            />
-            <SliderRow
-              label="Stiffness"
-              value={controls.stiffness}
-              min={0.25}
-              max={4}
-              step={0.05}
-              unit=" ×"
-              original={initial.stiffness}
-              onChange={(stiffness) => tuning.update({ stiffness })}
-              testId="control-stiffness"
-            />
-            <SliderRow
-              label="Damping"
-              value={controls.damping}
-              min={0.25}
-              max={4}
-              step={0.05}
-              unit=" ×"
-              original={initial.damping}
-              onChange={(damping) => tuning.update({ damping })}
-              testId="control-damping"
-            />
+            {DYNAMICS.map(({ key, label, min }) => (
+              <SliderRow
+                key={key}
+                label={label}
+                value={controls[key]}
+                min={min}
+                max={4}
+                step={0.05}
+                unit=" ×"
+                original={initial[key]}
+                onChange={(v) => tuning.update({ [key]: v })}
+                testId={`control-${key}`}
+              />
+            ))}
           </Flex>
           <Flex direction="column" gap="2">
             <Heading as="h3" size="2">

@@ -4,7 +4,7 @@ import { ApiErrorCallout } from '@/components/errors/api-error-callout';
 import { WarningIcon } from '@/components/ui/icons';
 import { Mono } from '@/components/ui/mono';
 import { paths } from '@/config/paths';
-import { useShot } from '../api/get-shot';
+import { useShot } from '@/features/shots/api/get-shot';
 import { useTake } from '../api/get-take';
 import { useTakeFile } from '../api/get-take-file';
 import { describeModelError, useTakeModel } from '../hooks/use-take-model';

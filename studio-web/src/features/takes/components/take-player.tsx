@@ -3,10 +3,10 @@ import { useCallback, useMemo, useReducer, useRef, useState } from 'react';
 import { KeyHint } from '@/components/ui/key-hint';
 import { useOpenShortcutHelp } from '@/components/layouts/shortcuts-provider';
 import { usePermissions, useSession } from '@/features/auth';
+import type { Shot } from '@/features/shots/api/shot-types';
 import { useShotTakes } from '../api/get-shot-takes';
 import { useNotes } from '../api/get-notes';
 import { useTakeFile } from '../api/get-take-file';
-import type { TakeShot } from '../api/get-shot';
 import type { MarkPoint, Note } from '../api/note-view';
 import type { Take } from '../api/take-view';
 import { useLiveTuning } from '../hooks/use-live-tuning';
@@ -32,7 +32,8 @@ import { modeLabel, ViewOptions, type ViewSettings } from './view-options';
 export interface TakePlayerProps {
   showId: string;
   take: Take;
-  shot: TakeShot;
+  /** The take's shot: its frame range and rate place the take's frames. */
+  shot: Pick<Shot, 'frameStart' | 'frameEnd' | 'fps'>;
   model: TakeModel;
 }
 

@@ -133,7 +133,11 @@ export function useLiveTuning(model: TakeModel) {
     record(simulate(initial, current.current.solo));
   }, [initial, tuning, simulate, record]);
 
-  const changed = JSON.stringify(controls) !== JSON.stringify(initial);
+  // The player re-renders on every playback frame: compare only when the controls change.
+  const changed = useMemo(
+    () => JSON.stringify(controls) !== JSON.stringify(initial),
+    [controls, initial],
+  );
   const basis = tuning.basis;
   // One object per change, so panels that take it can skip re-rendering during playback.
   return useMemo(
