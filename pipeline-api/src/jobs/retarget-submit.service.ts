@@ -14,7 +14,7 @@ import { Take } from '../takes/entities/take.entity';
 import { takeNotFound } from '../takes/takes.service';
 import { Character } from '../library/entities/character.entity';
 import { ProfileState, TissueProfile } from '../library/entities/tissue-profile.entity';
-import { profileNotFound } from '../library/library-errors';
+import { characterNotReady, clipNotReady, profileNotFound } from '../library/library-errors';
 import { profileNotReady } from '../library/profiles.service';
 import { RetargetJob } from './entities/retarget-job.entity';
 import { retargetJobView, type JobView } from './job-view';
@@ -72,11 +72,7 @@ export class RetargetSubmitService {
     const shot = await this.findShot(showId, shotId);
     const character = readyCharacter(shot);
     if (!shot.clip) throw shotNotReady(shot);
-    if (shot.clip.asset.state !== AssetState.Ready) {
-      throw new DomainError('conflict', 'CLIP_NOT_READY', `Clip ${shot.clip.name} is not ready.`, {
-        clipId: shot.clip.id,
-      });
-    }
+    if (shot.clip.asset.state !== AssetState.Ready) throw clipNotReady(shot.clip);
     const profile = await this.readyProfile(showId, body.profileId);
     const baseTake = body.baseTakeId
       ? await this.em.findOne(Take, { id: body.baseTakeId, show: showId, shot })
@@ -168,11 +164,7 @@ const shotNotReady = (shot: Shot) =>
 function readyCharacter(shot: Shot): Character {
   const c = shot.character;
   if (!c) throw shotNotReady(shot);
-  if (c.asset.state !== AssetState.Ready) {
-    throw new DomainError('conflict', 'CHARACTER_NOT_READY', `Character ${c.name} is not ready.`, {
-      characterId: c.id,
-    });
-  }
+  if (c.asset.state !== AssetState.Ready) throw characterNotReady(c);
   return c;
 }
 

@@ -18,3 +18,11 @@ export const profileNotFound = (id: string) =>
   new DomainError('not_found', 'PROFILE_NOT_FOUND', `No tissue profile ${id} in this show.`, {
     profileId: id,
   });
+/** A character whose file has not passed its check cannot be used yet. */
+export const characterNotReady = (c: { id: string; name: string }) =>
+  new DomainError('conflict', 'CHARACTER_NOT_READY', `Character ${c.name} is not ready.`, {
+    characterId: c.id,
+  });
+/** A clip whose file has not passed its check cannot be used yet. */
+export const clipNotReady = (c: { id: string; name: string }) =>
+  new DomainError('conflict', 'CLIP_NOT_READY', `Clip ${c.name} is not ready.`, { clipId: c.id });

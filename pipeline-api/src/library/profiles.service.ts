@@ -17,7 +17,7 @@ import { solveJobOptions, type LearnQueue } from '../jobs/solve-queue';
 import { Character } from './entities/character.entity';
 import { ProfileState, TissueProfile } from './entities/tissue-profile.entity';
 import { CapturesService } from './captures.service';
-import { characterNotFound, profileNotFound } from './library-errors';
+import { characterNotFound, characterNotReady, profileNotFound } from './library-errors';
 import { profileView, type ProfileView } from './library-views';
 import type { CreateProfileDto } from './dto/create-profile.dto';
 
@@ -78,16 +78,7 @@ export class ProfilesService {
         ],
       );
     }
-    if (character.asset.state !== AssetState.Ready) {
-      throw new DomainError(
-        'conflict',
-        'CHARACTER_NOT_READY',
-        `Character ${character.name} is not ready.`,
-        {
-          characterId: character.id,
-        },
-      );
-    }
+    if (character.asset.state !== AssetState.Ready) throw characterNotReady(character);
     const profile = new TissueProfile(capture, character, body.name);
     const submittedBy = principal.kind === 'user' ? principal.user : null;
     const job = new LearnJob(profile, { ...(body.options ?? {}) }, submittedBy);

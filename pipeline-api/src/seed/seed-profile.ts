@@ -4,6 +4,7 @@
 import { LearnJob } from '../jobs/entities/learn-job.entity';
 import { JobState } from '../jobs/job-state';
 import { runInThread } from '../jobs/solve/run-in-thread';
+import { recordLearned } from '../jobs/solve/solve-messages';
 import { jobObjectKey, readObject, writeObject } from '../jobs/solve/object-store';
 import { TissueProfile } from '../library/entities/tissue-profile.entity';
 import type { User } from '../users/entities/user.entity';
@@ -55,14 +56,7 @@ export async function seedProfiles(
     );
     const key = jobObjectKey(ctx.show.id, job.id, 'profile.ovsp');
     await writeObject(ctx.storage, key, reply.profile, 'application/octet-stream');
-    Object.assign(profile, {
-      modes: reply.modes,
-      fitReport: reply.fitReport,
-      spectra: reply.spectra,
-      drivers: reply.drivers,
-      sourceJoints: reply.sourceJoints,
-      files: [key],
-    });
+    recordLearned(profile, reply, key);
     job.moveTo(JobState.Solved);
     ctx.em.persist([profile, job]);
     out.set(p.name, profile);

@@ -87,14 +87,11 @@ export async function shotRange(
   const q = shotWhere(showId, filter, today);
   const rows = await pageRows(em, q, filter.sort, range);
   const last = rows.length < range.limit && (rows.length > 0 || range.offset === 0);
-  const [assignees, total] = await Promise.all([
-    assigneesOf(
-      em,
-      rows.map((r) => r.id),
-    ),
+  const [items, total] = await Promise.all([
+    views(em, rows, today),
     last ? range.offset + rows.length : countWhere(em, q),
   ]);
-  return { items: views(em, rows, assignees, today), total };
+  return { items, total };
 }
 
 /** A filtered, sorted range of a show's shots as the API shows them. */
@@ -106,21 +103,7 @@ export async function shotRows(
   range: { limit: number; offset: number },
 ): Promise<ShotView[]> {
   const rows = await pageRows(em, shotWhere(showId, filter, today), filter.sort, range);
-  const assignees = await assigneesOf(
-    em,
-    rows.map((r) => r.id),
-  );
-  return views(em, rows, assignees, today);
-}
-
-/** How many of a show's shots match the filter. */
-export function countShots(
-  em: EntityManager,
-  showId: string,
-  filter: ShotFilterQuery,
-  today: string,
-): Promise<number> {
-  return countWhere(em, shotWhere(showId, filter, today));
+  return views(em, rows, today);
 }
 
 /** The page's rows in the asked order. */
@@ -149,13 +132,12 @@ async function countWhere(em: EntityManager, q: ShotSql): Promise<number> {
   return Number(row.n);
 }
 
-/** The views of rows with their assignees. */
-function views(
-  em: EntityManager,
-  rows: ShotRow[],
-  assignees: Map<string, { id: string; displayName: string }[]>,
-  today: string,
-): ShotView[] {
+/** The views of rows, with their assignees (one query). */
+async function views(em: EntityManager, rows: ShotRow[], today: string): Promise<ShotView[]> {
+  const assignees = await assigneesOf(
+    em,
+    rows.map((r) => r.id),
+  );
   const date = (v: string | Date) => em.getPlatform().parseDate(v as string);
   return rows.map((r) => rowView(r, assignees.get(r.id) ?? [], today, date));
 }

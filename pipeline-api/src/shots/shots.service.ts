@@ -11,7 +11,12 @@ import { AssetState } from '../assets/entities/asset.entity';
 import { todayUtc } from '../assets/upload-rules';
 import { Character } from '../library/entities/character.entity';
 import { Clip } from '../library/entities/clip.entity';
-import { characterNotFound, clipNotFound } from '../library/library-errors';
+import {
+  characterNotFound,
+  characterNotReady,
+  clipNotFound,
+  clipNotReady,
+} from '../library/library-errors';
 import { Shot } from './entities/shot.entity';
 import { assertRenderTransition, type RenderState } from './render-state';
 import { shotView, type ShotView } from './shot-view';
@@ -183,27 +188,14 @@ export class ShotsService {
   private async readyCharacter(showId: string, id: string): Promise<Character> {
     const c = await this.em.findOne(Character, { id, show: showId }, { populate: ['asset'] });
     if (!c) throw characterNotFound(id);
-    if (c.asset.state !== AssetState.Ready) {
-      throw new DomainError(
-        'conflict',
-        'CHARACTER_NOT_READY',
-        `Character ${c.name} is not ready.`,
-        {
-          characterId: id,
-        },
-      );
-    }
+    if (c.asset.state !== AssetState.Ready) throw characterNotReady(c);
     return c;
   }
 
   private async readyClip(showId: string, id: string): Promise<Clip> {
     const c = await this.em.findOne(Clip, { id, show: showId }, { populate: ['asset'] });
     if (!c) throw clipNotFound(id);
-    if (c.asset.state !== AssetState.Ready) {
-      throw new DomainError('conflict', 'CLIP_NOT_READY', `Clip ${c.name} is not ready.`, {
-        clipId: id,
-      });
-    }
+    if (c.asset.state !== AssetState.Ready) throw clipNotReady(c);
     return c;
   }
 

@@ -6,7 +6,7 @@ import { todayUtc } from '../assets/upload-rules';
 import { RenderState } from './render-state';
 import { JobState } from '../jobs/job-state';
 import { ReviewState } from '../takes/review-state';
-import { countShots, shotRows } from './shot-rows';
+import { shotRange, shotRows } from './shot-rows';
 import type { ShotView } from './shot-view';
 import { isoWeek, weekStart } from './iso-week';
 import { csvLine } from './csv';
@@ -103,8 +103,12 @@ export class TrackingService {
       summary.review[r.review_state ?? 'none'] += n;
     }
     const late = { late: true, sort: 'dueDate:asc,code:asc' };
-    summary.late.count = await countShots(this.em, showId, late, today);
-    const lateShots = await shotRows(this.em, showId, late, today, { limit: 100, offset: 0 });
+    // The count comes from the page itself when fewer than 100 shots are late.
+    const { items: lateShots, total } = await shotRange(this.em, showId, late, today, {
+      limit: 100,
+      offset: 0,
+    });
+    summary.late.count = total;
     summary.late.shots = lateShots.map((s) => ({
       id: s.id,
       code: s.code,

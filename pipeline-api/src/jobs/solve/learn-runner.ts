@@ -1,18 +1,19 @@
 import { Injectable, Logger } from '@nestjs/common';
 import { MikroORM } from '@mikro-orm/core';
 import type { Job } from 'bullmq';
-import { DomainError } from '../../common/errors/domain-error';
 import { StorageService } from '../../storage/storage.service';
 import { JobEventsPublisher } from '../../events/job-events-publisher';
 import { AssetState } from '../../assets/entities/asset.entity';
 import { CapturesService } from '../../library/captures.service';
+import { characterNotReady } from '../../library/library-errors';
 import { LearnJob } from '../entities/learn-job.entity';
 import { LEARN_JOBS } from '../job-kinds';
 import type { SolveJobData, SolveOutcome } from '../solve-queue';
-import { JobAttempt } from './job-attempt';
-import { runAttempt } from './run-attempt';
+import type { JobAttempt } from './job-attempt';
+import { runJobAttempt } from './run-attempt';
 import { runInThread } from './run-in-thread';
-import { jobObjectKey, readObject, writeObject } from './object-store';
+import { recordLearned } from './solve-messages';
+import { readObject, writeObject } from './object-store';
 
 /**
  * Learns a tissue profile in the worker: checks the capture may still be learned from (consent,
@@ -36,12 +37,13 @@ export class LearnRunner {
     token: string | undefined,
     released: AbortSignal,
   ): Promise<SolveOutcome> {
-    const { jobId, showId } = job.data;
-    const attempt = new JobAttempt(this.orm, this.events, LEARN_JOBS, jobId, showId, released);
-    const key = jobObjectKey(showId, jobId, 'profile.ovsp');
-    const cleanup = () => this.storage.delete(key);
-    return runAttempt({ attempt, job, token, logger: this.logger, cleanup }, () =>
-      this.learn(attempt, key),
+    const { orm, storage, events, logger } = this;
+    return runJobAttempt(
+      { orm, storage, events, logger },
+      LEARN_JOBS,
+      'profile.ovsp',
+      { job, token, released },
+      (attempt, key) => this.learn(attempt, key),
     );
   }
 
@@ -57,16 +59,7 @@ export class LearnRunner {
       profile.capture.id,
     );
     const character = profile.character;
-    if (character.asset.state !== AssetState.Ready) {
-      throw new DomainError(
-        'conflict',
-        'CHARACTER_NOT_READY',
-        `Character ${character.name} is not ready.`,
-        {
-          characterId: character.id,
-        },
-      );
-    }
+    if (character.asset.state !== AssetState.Ready) throw characterNotReady(character);
     await attempt.progress('download', 1);
     const [characterBytes, captureBytes] = await Promise.all([
       readObject(this.storage, character.asset.s3Key),
@@ -86,15 +79,6 @@ export class LearnRunner {
     );
     await attempt.progress('upload', 92);
     await writeObject(this.storage, key, reply.profile, 'application/octet-stream');
-    await attempt.finish(async (_tx, job) => {
-      Object.assign(job.profile, {
-        modes: reply.modes,
-        fitReport: reply.fitReport,
-        spectra: reply.spectra,
-        drivers: reply.drivers,
-        sourceJoints: reply.sourceJoints,
-        files: [key],
-      });
-    });
+    await attempt.finish(async (_tx, job) => recordLearned(job.profile, reply, key));
   }
 }

@@ -27,6 +27,9 @@ export async function writeObject(
   );
 }
 
+/** The file a job writes: a take (retarget) or a profile (learn). */
+export type JobOutputFile = 'take.glb' | 'profile.ovsp';
+
 /** Where a job's output goes: derived from the job id, so every attempt writes the same key. */
-export const jobObjectKey = (showId: string, jobId: string, file: 'take.glb' | 'profile.ovsp') =>
+export const jobObjectKey = (showId: string, jobId: string, file: JobOutputFile) =>
   `shows/${showId}/jobs/${jobId}/${file}`;

@@ -13,10 +13,10 @@ import { shotClipFrames } from '../../shots/shot-frames';
 import { RetargetJob } from '../entities/retarget-job.entity';
 import { RETARGET_JOBS } from '../job-kinds';
 import type { SolveJobData, SolveOutcome } from '../solve-queue';
-import { JobAttempt } from './job-attempt';
-import { runAttempt } from './run-attempt';
+import type { JobAttempt } from './job-attempt';
+import { runJobAttempt } from './run-attempt';
 import { runInThread } from './run-in-thread';
-import { jobObjectKey, readObject, writeObject } from './object-store';
+import { readObject, writeObject } from './object-store';
 
 /**
  * Retargets a shot in the worker: downloads profile, character and clip, solves in a solver
@@ -41,12 +41,13 @@ export class RetargetRunner {
     token: string | undefined,
     released: AbortSignal,
   ): Promise<SolveOutcome> {
-    const { jobId, showId } = job.data;
-    const attempt = new JobAttempt(this.orm, this.events, RETARGET_JOBS, jobId, showId, released);
-    const key = jobObjectKey(showId, jobId, 'take.glb');
-    const cleanup = () => this.storage.delete(key);
-    return runAttempt({ attempt, job, token, logger: this.logger, cleanup }, () =>
-      this.retarget(attempt, key),
+    const { orm, storage, events, logger } = this;
+    return runJobAttempt(
+      { orm, storage, events, logger },
+      RETARGET_JOBS,
+      'take.glb',
+      { job, token, released },
+      (attempt, key) => this.retarget(attempt, key),
     );
   }
 

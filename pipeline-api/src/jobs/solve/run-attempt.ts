@@ -1,9 +1,48 @@
 import type { Logger } from '@nestjs/common';
+import type { MikroORM } from '@mikro-orm/core';
 import { DelayedError, UnrecoverableError, type Job } from 'bullmq';
-import type { AnyJob } from '../job-kinds';
+import type { StorageService } from '../../storage/storage.service';
+import type { JobEventsPublisher } from '../../events/job-events-publisher';
+import type { AnyJob, JobKindOps } from '../job-kinds';
 import type { SolveJobData, SolveOutcome } from '../solve-queue';
-import type { JobAttempt } from './job-attempt';
+import { JobAttempt } from './job-attempt';
+import { jobObjectKey, type JobOutputFile } from './object-store';
 import { badInput, faultMessage, JobCanceled, JobReleased, JobTakenOver } from './solve-failures';
+
+/** The worker's services a runner's attempt uses. */
+export interface RunnerServices {
+  orm: MikroORM;
+  events: JobEventsPublisher;
+  storage: StorageService;
+  logger: Logger;
+}
+
+/** One queue entry as the worker hands it to a runner. */
+export interface QueuedRun {
+  job: Job<SolveJobData, SolveOutcome>;
+  token: string | undefined;
+  /** Aborts when the worker shuts down and hands the job back. */
+  released: AbortSignal;
+}
+
+/**
+ * Runs one attempt of a job of kind `ops` whose output is `file` under the job's key (the same
+ * key every attempt, removed again when the job ends without a result); `work` does the solve.
+ */
+export function runJobAttempt<J extends AnyJob>(
+  services: RunnerServices,
+  ops: JobKindOps<J>,
+  file: JobOutputFile,
+  { job, token, released }: QueuedRun,
+  work: (attempt: JobAttempt<J>, key: string) => Promise<void>,
+): Promise<SolveOutcome> {
+  const { orm, events, storage, logger } = services;
+  const { jobId, showId } = job.data;
+  const attempt = new JobAttempt(orm, events, ops, jobId, showId, released);
+  const key = jobObjectKey(showId, jobId, file);
+  const cleanup = () => storage.delete(key);
+  return runAttempt({ attempt, job, token, logger, cleanup }, () => work(attempt, key));
+}
 
 /** What one run of a queue entry needs. */
 export interface AttemptContext<J extends AnyJob> {

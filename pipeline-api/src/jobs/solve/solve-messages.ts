@@ -5,6 +5,7 @@ import type {
   ProfileDriver,
   ProfileMode,
   ProfileSpectrum,
+  TissueProfile,
 } from '../../library/entities/tissue-profile.entity';
 import type { LearnSettings } from '../entities/learn-job.entity';
 
@@ -26,6 +27,12 @@ export interface LearnReply {
   spectra: ProfileSpectrum[];
   drivers: ProfileDriver[];
   sourceJoints: string[];
+}
+
+/** Fills a profile row with what a learn gave back and the key its file was stored under. */
+export function recordLearned(profile: TissueProfile, reply: LearnReply, fileKey: string): void {
+  const { modes, fitReport, spectra, drivers, sourceJoints } = reply;
+  Object.assign(profile, { modes, fitReport, spectra, drivers, sourceJoints, files: [fileKey] });
 }
 
 /** Retarget a shot: profile, character and clip files in, take file and its figures out. */
